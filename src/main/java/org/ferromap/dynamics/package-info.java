@@ -1,5 +1,21 @@
 /**
- * Time-domain simulation: per-unit ODEs, switching events, stroboscopic sampling, steady-state certification, mode classification (spectrum, 0-1 test, Lyapunov exponent).
- * May use: circuit, equipment, errors.
+ * Time-domain simulation of the single-phase equivalent circuit and classification of the state
+ * it settles into (DOMAIN.md §6).
+ *
+ * <ul>
+ * <li>{@link org.ferromap.dynamics.PerUnitCircuit}: the circuit as a per-unit ODE (state, state
+ * with a tangent vector, state with the 2x2 fundamental matrix), allocation-free, also exposed as
+ * Hipparchus {@code OrdinaryDifferentialEquation}s.</li>
+ * <li>{@link org.ferromap.dynamics.DormandPrince853}: a lean DOP853 (Hairer, Norsett, Wanner)
+ * with dense output and stiffness detection; Hipparchus is kept as the cross-check in tests.</li>
+ * <li>{@link org.ferromap.dynamics.StroboscopicMap} and {@link org.ferromap.dynamics.OrbitCertifier}:
+ * the period map, its monodromy, and Newton on P^k to certify a settled periodic state.</li>
+ * <li>{@link org.ferromap.dynamics.Simulator}: the run and the classification into
+ * {@link org.ferromap.dynamics.SteadyMode}, with the largest Lyapunov exponent (Benettin), the
+ * 0-1 test ({@link org.ferromap.dynamics.ZeroOneTest}) and the spectrum.</li>
+ * <li>{@link org.ferromap.dynamics.SimulationBenchmark}: the speed benchmark against the peer
+ * program (GSL rk8pd).</li>
+ * </ul>
+ * May use: circuit, equipment, errors, Hipparchus.
  */
 package org.ferromap.dynamics;
