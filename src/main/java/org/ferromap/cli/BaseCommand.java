@@ -9,6 +9,7 @@ import picocli.CommandLine;
  * What every verb shares: streams from picocli (so tests run commands in-process), and the one
  * place where failures become messages and exit codes. A verb implements {@link #work()}.
  */
+@CommandLine.Command(mixinStandardHelpOptions = true, sortOptions = false)
 abstract class BaseCommand implements Callable<Integer> {
 
     @CommandLine.Spec
