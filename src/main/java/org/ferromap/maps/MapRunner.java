@@ -118,11 +118,6 @@ public final class MapRunner {
     private static void checkMemory(MapRequest request, int width, RefinementSettings refine, LongSupplier available) {
         long need = requiredBytes(request, width, refine);
         String grid = request.nx() + " x " + request.ny() + " cells x " + width + " values";
-        if (satMul(request.cells(), width) > Integer.MAX_VALUE - 16) {
-            throw new FerromapException(MessageKey.TOO_LARGE, "the map grid " + grid + " holds "
-                    + satMul(request.cells(), width) + " values, more than one array can (" + (Integer.MAX_VALUE - 16)
-                    + ") and needs " + bytes(need) + "; use fewer steps on the axes");
-        }
         long have = available.getAsLong();
         if (need > have) {
             System.gc(); // "used" counts garbage too: measure once more before refusing
@@ -134,6 +129,11 @@ public final class MapRunner {
                     + " of memory but " + bytes(have) + " is available (" + Math.round(HEAP_SHARE * 100)
                     + " % of the free heap); use fewer steps on the axes, or raise the heap, e.g. FERROMAP_JAVA_OPTS=-Xmx"
                     + xmxGiB + "g");
+        }
+        if (satMul(request.cells(), width) > Integer.MAX_VALUE - 16) {
+            throw new FerromapException(MessageKey.TOO_LARGE, "the map grid " + grid + " holds "
+                    + satMul(request.cells(), width) + " values, more than one array can (" + (Integer.MAX_VALUE - 16)
+                    + ") and needs " + bytes(need) + "; use fewer steps on the axes");
         }
     }
 
