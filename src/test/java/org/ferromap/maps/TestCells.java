@@ -94,7 +94,7 @@ final class TestCells {
     }
 
     /** A smooth, cheap cell of a given width: component k = sin(x + k) * cos(y - k). */
-    static final class Smooth implements CellFunction {
+    static class Smooth implements CellFunction {
         private final int width;
 
         Smooth(int width) {
