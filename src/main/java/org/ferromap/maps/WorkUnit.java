@@ -26,6 +26,18 @@ public record WorkUnit(int pass, int tileX, int tileY, int ix0, int iy0, int ix1
             throw new IllegalArgumentException("bad tile bounds [" + ix0 + "," + ix1 + ")x[" + iy0 + "," + iy1 + ") in a grid "
                     + nx + " wide");
         }
+        if (cells != null) {
+            int prev = -1;
+            for (int c : cells) {
+                int ix = c % nx;
+                int iy = c / nx;
+                if (c <= prev || ix < ix0 || ix >= ix1 || iy < iy0 || iy >= iy1) {
+                    throw new IllegalArgumentException("cell " + c + " is out of order or outside the tile [" + ix0 + ","
+                            + ix1 + ")x[" + iy0 + "," + iy1 + ") of a grid " + nx + " wide");
+                }
+                prev = c;
+            }
+        }
     }
 
     /** Number of cells this unit computes. */
