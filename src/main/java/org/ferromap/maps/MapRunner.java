@@ -202,6 +202,8 @@ public final class MapRunner {
         final double[] data;
         final byte[] flags;
         final AtomicLong computed = new AtomicLong();
+        /** PENDING cells per tile, so assembling a pass visits only tiles with work. */
+        final int[] pendingInTile;
         long reused;
         int passes;
 
@@ -223,6 +225,7 @@ public final class MapRunner {
             this.ys = request.y().values();
             this.data = new double[nx * ny * width];
             this.flags = new byte[nx * ny];
+            this.pendingInTile = new int[tilesX * tilesY];
         }
 
         /** Every cell, tile by tile. */
@@ -245,7 +248,7 @@ public final class MapRunner {
             int[] ly = lattice(ny, stride);
             for (int iy : ly) {
                 for (int ix : lx) {
-                    flags[iy * nx + ix] = PENDING;
+                    need(ix, iy);
                 }
             }
             pendingPass(0, "coarse lattice (stride " + stride + ")");
@@ -333,7 +336,11 @@ public final class MapRunner {
                         continue;
                     }
                     int cx = (ix - xa <= xb - ix) ? xa : xb;
-                    System.arraycopy(data, (cy * nx + cx) * width, data, c * width, width);
+                    int from = (cy * nx + cx) * width;
+                    int to = c * width;
+                    for (int k = 0; k < width; k++) {
+                        data[to + k] = data[from + k];
+                    }
                     flags[c] = MapGrid.INFERRED;
                 }
             }
@@ -341,8 +348,9 @@ public final class MapRunner {
 
         private void need(int ix, int iy) {
             int c = iy * nx + ix;
-            if (flags[c] != MapGrid.COMPUTED) {
+            if (flags[c] != MapGrid.COMPUTED && flags[c] != PENDING) {
                 flags[c] = PENDING;
+                pendingInTile[(iy / tile) * tilesX + ix / tile]++;
             }
         }
 
@@ -354,6 +362,10 @@ public final class MapRunner {
                 int y0 = ty * tile;
                 int y1 = Math.min(ny, y0 + tile);
                 for (int tx = 0; tx < tilesX; tx++) {
+                    if (pendingInTile[ty * tilesX + tx] == 0) {
+                        continue;
+                    }
+                    pendingInTile[ty * tilesX + tx] = 0;
                     int x0 = tx * tile;
                     int x1 = Math.min(nx, x0 + tile);
                     int n = 0;
@@ -419,10 +431,25 @@ public final class MapRunner {
 
         /** Copies a unit's values to its cells' slots; units of a pass never share a cell. */
         private void write(WorkUnit u, double[] values) {
-            int n = u.cellCount();
-            for (int k = 0; k < n; k++) {
-                int c = u.cell(k);
-                System.arraycopy(values, k * width, data, c * width, width);
+            int[] cells = u.cells();
+            if (cells == null) {
+                int from = 0;
+                for (int iy = u.iy0(); iy < u.iy1(); iy++) {
+                    int to = (iy * nx + u.ix0()) * width;
+                    int n = (u.ix1() - u.ix0()) * width;
+                    System.arraycopy(values, from, data, to, n); // a row of the tile is contiguous
+                    Arrays.fill(flags, iy * nx + u.ix0(), iy * nx + u.ix1(), MapGrid.COMPUTED);
+                    from += n;
+                }
+                return;
+            }
+            for (int k = 0; k < cells.length; k++) {
+                int c = cells[k];
+                int from = k * width;
+                int to = c * width;
+                for (int j = 0; j < width; j++) { // a loop beats arraycopy for a handful of values
+                    data[to + j] = values[from + j];
+                }
                 flags[c] = MapGrid.COMPUTED;
             }
         }

@@ -59,10 +59,21 @@ public record WorkUnit(int pass, int tileX, int tileY, int ix0, int iy0, int ix1
      * {@code k * width}). The one loop every executor uses, so results are the same whoever runs it.
      */
     public void evaluate(double[] xs, double[] ys, CellFunction f, int width, double[] out) {
-        int n = cellCount();
-        for (int k = 0; k < n; k++) {
-            int c = cell(k);
-            f.evaluate(xs[c % nx], ys[c / nx], out, k * width);
+        if (cells == null) {
+            int offset = 0;
+            for (int iy = iy0; iy < iy1; iy++) {
+                double y = ys[iy];
+                for (int ix = ix0; ix < ix1; ix++) {
+                    f.evaluate(xs[ix], y, out, offset);
+                    offset += width;
+                }
+            }
+            return;
+        }
+        for (int k = 0; k < cells.length; k++) {
+            int c = cells[k];
+            int iy = c / nx;
+            f.evaluate(xs[c - iy * nx], ys[iy], out, k * width);
         }
     }
 
