@@ -26,8 +26,10 @@ import org.ferromap.errors.MessageKey;
  * of the whole file. Anything else (another study, a truncated or damaged file) is ignored, counted
  * in {@link #rejectedCount()}, and the unit is computed again and the file overwritten.
  *
- * <p>Keep the root outside an output folder that is replaced atomically (e.g. beside it), or the
- * tiles vanish with an aborted run. Thread-safe: distinct units go to distinct files.
+ * <p>Keep the root out of a staging folder that an aborted run discards; {@link #forOutput} puts it
+ * in the final output folder. Thread-safe: distinct units go to distinct files. Two processes
+ * computing the same map into the same store at once are not coordinated (each file stays whole,
+ * the work is done twice).
  */
 public final class TileStore {
 
@@ -47,6 +49,17 @@ public final class TileStore {
     /** A store under {@code root} (created on first use). */
     public static TileStore at(Path root) {
         return new TileStore(root.toAbsolutePath().normalize());
+    }
+
+    /**
+     * The store of a command writing its results to the output folder {@code out}:
+     * {@code <out>/.map-tiles}. With {@code report.OutputFolder}, which stages new results beside
+     * {@code out} and swaps them in only at commit, the tiles of an interrupted run stay in the old
+     * {@code out} until a rerun completes, and vanish with it at that commit: resume data lives
+     * exactly as long as it is useful.
+     */
+    public static TileStore forOutput(Path out) {
+        return at(out.resolve(".map-tiles"));
     }
 
     /** The folder holding one folder per run key. */

@@ -53,4 +53,13 @@ class TileStoreTest {
         s.delete(KEY);
         assertFalse(Files.exists(s.folder(KEY)));
     }
+
+    /** A command's store sits in its output folder, one folder per run key [cp]. */
+    @Test
+    void layout() {
+        TileStore s = TileStore.forOutput(tmp.resolve("study-out"));
+        assertEquals(tmp.resolve("study-out").resolve(".map-tiles").toAbsolutePath(), s.root());
+        assertEquals(s.root().resolve(KEY.substring(0, 16)), s.folder(KEY));
+        assertEquals("tile-p3-4-5.bin", s.file(KEY, new WorkUnit(3, 4, 5, 4, 5, 5, 6, 10, null)).getFileName().toString());
+    }
 }
