@@ -62,7 +62,7 @@ public interface ProgressListener {
         return new TextProgress(out, true, System::nanoTime);
     }
 
-    /** Plain lines, one every 5 % of a pass or every 10 s, whichever comes first. */
+    /** Plain lines: one every 5 % of a pass (at most one a second) and at least one every 10 s. */
     static ProgressListener lines(PrintWriter out) {
         return new TextProgress(out, false, System::nanoTime);
     }

@@ -6,13 +6,14 @@ import java.util.concurrent.atomic.AtomicLong;
 import java.util.function.LongSupplier;
 
 /**
- * The two text progress displays: a bar redrawn in place (terminal) or plain lines (every 5 % or
- * 10 s). Counting is lock-free; drawing is synchronized and throttled.
+ * The two text progress displays: a bar redrawn in place (terminal) or plain lines (every 5 % but
+ * at most one a second, and at least every 10 s). Counting is lock-free; drawing is synchronized and throttled.
  */
 final class TextProgress implements ProgressListener {
 
     private static final long BAR_INTERVAL_NANOS = 200_000_000L;   // redraw at most 5 times a second
     private static final long LINE_INTERVAL_NANOS = 10_000_000_000L; // a plain line at least every 10 s
+    private static final long LINE_MIN_GAP_NANOS = 1_000_000_000L;   // and at most one a second (short passes)
     private static final int LINE_PERCENT_STEP = 5;
     private static final int BAR_WIDTH = 24;
 
@@ -68,10 +69,9 @@ final class TextProgress implements ProgressListener {
             }
             return;
         }
-        int percent = percent(d);
-        if (percent >= lastPercentShown + LINE_PERCENT_STEP || now - lastDraw >= LINE_INTERVAL_NANOS) {
+        if (lineDue(percent(d), now)) {
             synchronized (this) {
-                if (percent >= lastPercentShown + LINE_PERCENT_STEP || now - lastDraw >= LINE_INTERVAL_NANOS) {
+                if (lineDue(percent(d), now)) {
                     line(now, done.get());
                 }
             }
@@ -102,6 +102,12 @@ final class TextProgress implements ProgressListener {
         out.println(String.format(Locale.ROOT, "map: %d cells: %d computed, %d reused, %d inferred, in %s",
                 s.cells(), s.computed(), s.reused(), s.inferred(), duration(s.seconds())));
         out.flush();
+    }
+
+    private boolean lineDue(int percent, long now) {
+        long since = now - lastDraw;
+        return since >= LINE_INTERVAL_NANOS
+                || (percent >= lastPercentShown + LINE_PERCENT_STEP && since >= LINE_MIN_GAP_NANOS);
     }
 
     private int percent(long d) {

@@ -12,7 +12,7 @@ class ProgressTest {
 
     /**
      * Plain lines come every 5 % of a pass [cp: log-friendly progress], with the rate and the time
-     * left from a fake clock: 100 cells per second, 1000 cells, 10 cells per step.
+     * left from a fake clock: 20 cells per second, 1000 cells, 10 cells per step.
      */
     @Test
     void plainLinesEveryFivePercent() {
@@ -21,15 +21,32 @@ class ProgressTest {
         TextProgress p = new TextProgress(new PrintWriter(s), false, now::get);
         p.passStarted(0, "all cells", 1000, 0);
         for (int i = 0; i < 100; i++) {
-            now.addAndGet(100_000_000L); // 0.1 s per 10 cells
+            now.addAndGet(500_000_000L); // 0.5 s per 10 cells
             p.cellsDone(10);
         }
         p.passFinished(0);
         String[] lines = s.toString().split("\n");
         assertEquals(1 + 20, lines.length, s.toString()); // header, then 5 %, 10 %, ... 100 %
         assertEquals("map all cells: 1000 cells to compute", lines[0]);
-        assertEquals("map all cells: 50% (500/1000 cells, 100 cells/s, ETA 0:05)", lines[10]);
-        assertEquals("map all cells: 100% (1000/1000 cells, 100 cells/s)", lines[20]);
+        assertEquals("map all cells: 50% (500/1000 cells, 20 cells/s, ETA 0:25)", lines[10]);
+        assertEquals("map all cells: 100% (1000/1000 cells, 20 cells/s)", lines[20]);
+    }
+
+    /** A pass shorter than a second prints its header and its end only, not twenty lines [cp]. */
+    @Test
+    void shortPassesStayQuiet() {
+        StringWriter s = new StringWriter();
+        AtomicLong now = new AtomicLong();
+        TextProgress p = new TextProgress(new PrintWriter(s), false, now::get);
+        p.passStarted(2, "refinement level 2 (blocks of 2)", 100, 0);
+        for (int i = 0; i < 100; i++) {
+            now.addAndGet(1_000_000L);
+            p.cellsDone(1);
+        }
+        p.passFinished(2);
+        String[] lines = s.toString().split("\n");
+        assertEquals(2, lines.length, s.toString());
+        assertTrue(lines[1].startsWith("map refinement level 2 (blocks of 2): 100% (100/100 cells"), lines[1]);
     }
 
     /** A slow pass still prints a line at least every 10 s [cp]. */
