@@ -71,12 +71,12 @@ public final class MapRunner {
             refine.comparator().checkWidth(width);
         }
         checkMemory(request, width, refine, available);
-        Run run = new Run(request, cell, executor, store, progress == null ? ProgressListener.NONE : progress, width,
-                runKey(request, cell, refine));
         long start = System.nanoTime();
+        String key = runKey(request, cell, refine);
         if (store != null) {
-            store.prepare(run.key);
+            store.prepare(key);
         }
+        Run run = new Run(request, cell, executor, store, progress == null ? ProgressListener.NONE : progress, width, key);
         int rejectedBefore = store == null ? 0 : store.rejectedCount();
         if (refine.enabled()) {
             run.refined(refine);
