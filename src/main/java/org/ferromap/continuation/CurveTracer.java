@@ -427,25 +427,29 @@ final class CurveTracer {
             if (!(sTry > lo && sTry < hi)) {
                 sTry = 0.5 * (lo + hi);
             }
-            for (int j = 0; j < size; j++) {
-                locZ[j] = zA[j] + sTry * tA[j];
-            }
-            if (newton.solve(locZ, tA, base + sTry, 2 * settings.maxNewtonIterations(), tol) < 0 || !tangent(locZ, tA, locT)) {
-                break;
-            }
-            double f;
-            if (kind == SpecialPoint.Kind.FOLD) {
-                f = locT[config.foldIndex()];
-            } else if (kind == SpecialPoint.Kind.BRANCH_POINT) {
-                f = lastDetSign * Math.exp(Math.max(-MAX_EXP, Math.min(MAX_EXP, lastLogDet - logRef)));
-            } else {
-                f = hooks.customTest(locZ);
-            }
+            double f = testAt(kind, zA, tA, base, sTry, logRef);
             if (Double.isNaN(f)) {
-                break;
+                // A branch point makes the bordered matrix singular on the spot: step aside by
+                // half the tolerance and carry on from there.
+                double[] aside = {sTry + 0.25 * tol, sTry - 0.25 * tol};
+                for (double s2 : aside) {
+                    if (s2 > lo && s2 < hi) {
+                        f = testAt(kind, zA, tA, base, s2, logRef);
+                        if (!Double.isNaN(f)) {
+                            sTry = s2;
+                            break;
+                        }
+                    }
+                }
+                if (Double.isNaN(f)) {
+                    // Both sides singular too: the zero is pinned between the last good points
+                    // when they are that close.
+                    located = hi - lo <= 2 * tol;
+                    break;
+                }
             }
             System.arraycopy(locZ, 0, bestZ, 0, size);
-            if (f == 0 || hi - lo <= tol || Math.abs(sTry - sPrev) <= 0.1 * tol) {
+            if (f == 0 || hi - lo <= tol || Math.abs(sTry - sPrev) <= tol) {
                 located = true;
                 break;
             }
@@ -470,6 +474,23 @@ final class CurveTracer {
             sPrev = sTry;
         }
         trace.specials.add(new Special(kind, index, bestZ.clone(), located));
+    }
+
+    /** The test function at pseudo-arclength s from zA along tA (point left in locZ), NaN on failure. */
+    private double testAt(SpecialPoint.Kind kind, double[] zA, double[] tA, double base, double s, double logRef) {
+        for (int j = 0; j < size; j++) {
+            locZ[j] = zA[j] + s * tA[j];
+        }
+        if (newton.solve(locZ, tA, base + s, 2 * settings.maxNewtonIterations(), settings.locateTolerance()) < 0
+                || !tangent(locZ, tA, locT)) {
+            return Double.NaN;
+        }
+        if (kind == SpecialPoint.Kind.FOLD) {
+            return locT[config.foldIndex()];
+        } else if (kind == SpecialPoint.Kind.BRANCH_POINT) {
+            return lastDetSign * Math.exp(Math.max(-MAX_EXP, Math.min(MAX_EXP, lastLogDet - logRef)));
+        }
+        return hooks.customTest(locZ);
     }
 
     private static double dot(double[] a, double[] b) {
