@@ -7,7 +7,8 @@ import org.hipparchus.linear.EigenDecompositionNonSymmetric;
 
 /**
  * Stability of x as an equilibrium of x' = F(x, p): the number of eigenvalues of dF/dx with
- * positive real part (Hipparchus non-symmetric eigen-decomposition). A real part within
+ * positive real part (Hipparchus non-symmetric eigen-decomposition; closed forms for one and two
+ * states). A real part within
  * 1e-10 times the matrix's largest entry counts as zero, so a point sitting on a fold is not
  * called unstable by round-off.
  */
@@ -35,11 +36,27 @@ final class SteadyStateStability implements StabilityCriterion {
         if (largest == 0) {
             return 0;
         }
+        double zero = ZERO_RATIO * largest;
+        if (n == 1) {
+            return dFdx[0][0] > zero ? 1 : 0;
+        }
+        if (n == 2) {
+            // Closed form: eigenvalues tr/2 +- sqrt(tr^2/4 - det).
+            double tr = dFdx[0][0] + dFdx[1][1];
+            double det = dFdx[0][0] * dFdx[1][1] - dFdx[0][1] * dFdx[1][0];
+            if (det < -zero * largest) {
+                return 1;
+            }
+            if (det > zero * largest) {
+                return tr > zero ? 2 : 0;
+            }
+            return tr > zero ? 1 : 0;
+        }
         try {
             Complex[] eig = new EigenDecompositionNonSymmetric(new Array2DRowRealMatrix(dFdx, false)).getEigenvalues();
             int count = 0;
             for (Complex c : eig) {
-                if (c.getReal() > ZERO_RATIO * largest) {
+                if (c.getReal() > zero) {
                     count++;
                 }
             }
