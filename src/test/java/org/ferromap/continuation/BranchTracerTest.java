@@ -233,6 +233,34 @@ class BranchTracerTest {
     }
 
     @Test
+    void fixedSecondParameterKeepsTheAnalyticJacobian() {
+        int[] calls = {0};
+        TwoParameterProblem counted = new TwoParameterProblem() {
+            @Override
+            public int dimension() {
+                return 1;
+            }
+
+            @Override
+            public void residual(double[] x, double p, double q, double[] out) {
+                out[0] = x[0] * x[0] * x[0] - q * x[0] - p;
+            }
+
+            @Override
+            public void jacobian(double[] x, double p, double q, double[][] dFdx, double[] dFdp, double[] dFdq) {
+                calls[0]++;
+                dFdx[0][0] = 3 * x[0] * x[0] - q;
+                dFdp[0] = -1;
+                dFdq[0] = -x[0];
+            }
+        };
+        Branch b = new BranchTracer(ContinuationSettings.DEFAULTS.withWindow(-2, 2))
+                .trace(counted.atFixedQ(1), new double[] {-1.5}, -1.875, Direction.INCREASING);
+        assertEquals(2, b.specialPoints(SpecialPoint.Kind.FOLD).size());
+        assertTrue(calls[0] > 0, "the problem's own Jacobian must be used through atFixedQ");
+    }
+
+    @Test
     void badStartValuesAreInputErrors() {
         BranchTracer tracer = new BranchTracer(ContinuationSettings.DEFAULTS.withWindow(-2, 2));
         FerromapException size = assertThrows(FerromapException.class,
