@@ -10,7 +10,8 @@ import org.ferromap.errors.MessageKey;
  * change of the tangent's p-component, located on the minimally augmented system) and simple
  * branch points (sign change of det [F_x F_p; t^T], located along the branch), with the
  * stability of every point from a pluggable criterion. Immutable and stateless between runs:
- * each call to {@link #trace} builds its own work space, so one tracer may serve several threads.
+ * each call to {@link #trace} builds its own work space, so one tracer may serve several threads
+ * (as long as the problems it is given are themselves safe to share).
  */
 public final class BranchTracer {
 
