@@ -120,6 +120,15 @@ public record Transformer(
         return new ScaledCurve(phaseCurve, 1.0 / Constants.SQRT3, Constants.SQRT3);
     }
 
+    /**
+     * A copy whose winding curve is given per unit of the rated winding peak flux and current
+     * ({@link #windingBase()}): i(lambda) = I_b i_pu(lambda / lambda_b).
+     */
+    public Transformer withPerUnitCurve(SaturationCurve perUnitCurve) {
+        PerUnitBase b = windingBase();
+        return withPhaseCurve(new ScaledCurve(perUnitCurve, b.flux(), b.current()));
+    }
+
     public Transformer withPhaseCurve(SaturationCurve c) {
         return new Transformer(rating, primaryVoltage, ratedFrequency, connection, core, excitingCurrent, noLoadLoss, c);
     }

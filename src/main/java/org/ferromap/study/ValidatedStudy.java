@@ -34,6 +34,13 @@ public record ValidatedStudy(
         MapSettings map,
         List<String> notes) {
 
+    public ValidatedStudy {
+        description = description == null ? "" : description;
+        analyses = analyses == null ? Map.of()
+                : java.util.Collections.unmodifiableMap(new java.util.LinkedHashMap<>(analyses));
+        notes = notes == null ? List.of() : List.copyOf(notes);
+    }
+
     /**
      * The {@code circuit:} form.
      *

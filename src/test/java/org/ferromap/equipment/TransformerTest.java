@@ -65,6 +65,27 @@ class TransformerTest {
         assertTrue(bank(Connection.DELTA, 0.008, 450).wyeEquivalentCurve() instanceof ScaledCurve);
     }
 
+    /**
+     * A per-unit curve scales by the winding base: at lambda = x lambda_b the current is I_b i_pu(x)
+     * (definition of per unit). Needs ScaledCurve (curves branch): skipped until it evaluates.
+     */
+    @Test
+    void perUnitCurveScalesByTheWindingBase() {
+        PolynomialCurve pu = new PolynomialCurve(0.008, 0.004, 11);
+        Transformer t = bank(Connection.DELTA, 0.008, 450).withPerUnitCurve(pu);
+        assertTrue(t.phaseCurve() instanceof ScaledCurve);
+        PerUnitBase b = t.windingBase();
+        double got;
+        try {
+            got = t.phaseCurve().current(1.2 * b.flux());
+        } catch (UnsupportedOperationException pending) {
+            org.junit.jupiter.api.Assumptions.assumeTrue(false, "needs the curves branch (ScaledCurve)");
+            return;
+        }
+        double expected = b.current() * pu.current(1.2);
+        assertEquals(expected, got, 1e-12 * expected);
+    }
+
     @Test
     void refusesImpossibleNameplates() {
         assertEquals(MessageKey.OUT_OF_RANGE, assertThrows(FerromapException.class, () -> bank(Connection.DELTA, 0, 450)).key());
