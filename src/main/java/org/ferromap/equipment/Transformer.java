@@ -12,9 +12,10 @@ import org.ferromap.units.PerUnitBase;
  *
  * <p>The curve is that of one winding <em>as connected</em>, in absolute units (flux linkage in
  * Wb-turn, peak current in A): a delta winding sits at line voltage, a wye winding at phase
- * voltage. {@link #wyeEquivalentCurve()} gives the per-phase wye-equivalent used by the
- * reductions (DOMAIN.md §1.2 states its table in wye-equivalent terms). A curve given per unit of
- * rated winding peak flux and current converts through {@link #windingBase()}.
+ * voltage. {@link #wyeEquivalentCurve()} gives its per-phase wye-equivalent (the terms of
+ * DOMAIN.md §1.2's table and of the linear figures here: X_m, Lm, R); the reductions form their loop
+ * curves from the winding curve itself. A curve given per unit of rated winding peak flux and
+ * current converts through {@link #windingBase()} ({@link #withPerUnitCurve}).
  *
  * @param rating three-phase rating S, VA, &gt; 0
  * @param primaryVoltage rated primary line-to-line voltage, V rms, &gt; 0

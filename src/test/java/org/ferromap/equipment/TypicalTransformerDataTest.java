@@ -37,5 +37,9 @@ class TypicalTransformerDataTest {
         assertTrue(TypicalTransformerData.remarks(ok).isEmpty(), TypicalTransformerData.remarks(ok).toString());
         Transformer odd = ok.withExcitingCurrent(0.05).withNoLoadLoss(5000);
         assertEquals(2, TypicalTransformerData.remarks(odd).size());
+        // The Tier 2 figure itself (693 W for 1000 kVA, 0.0693 %) is "about 0.07 %": no remark.
+        Transformer tier2 = new Transformer(1000e3, 24.9e3, 60, Connection.DELTA, CoreType.SEPARATE_PHASE_CORES, 0.01, 693, c);
+        assertTrue(TypicalTransformerData.remarks(tier2).isEmpty(), TypicalTransformerData.remarks(tier2).toString());
+        assertEquals(1, TypicalTransformerData.remarks(tier2.withNoLoadLoss(250)).size());
     }
 }
