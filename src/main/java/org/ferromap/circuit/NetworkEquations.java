@@ -42,6 +42,14 @@ public final class NetworkEquations implements OrdinaryDifferentialEquation {
     /** Rate, per unit time, at which a drift of the lossless neutral's current balance decays. */
     public static final double CONSTRAINT_RATE = 1.0;
 
+    /**
+     * Flux linkage, per unit of E/omega, beyond which the magnetizing curves continue linearly with
+     * their slope there. No trajectory of the network gets near it (it takes 50 radians of full
+     * source voltage of one sign); only a rejected trial step of the integrator does, and there a
+     * polynomial curve would overflow to infinity and NaN, which the integrator cannot reject.
+     */
+    static final double FLUX_LIMIT = 50.0;
+
     /** Node index of ground in the winding incidence. */
     private static final int GROUND = -1;
     /** Node index of the neutral in the winding incidence. */
@@ -267,7 +275,7 @@ public final class NetworkEquations implements OrdinaryDifferentialEquation {
             v[k] = (closedMask & (1 << k)) != 0 ? s : y[3 + k];
         }
         for (int w = 0; w < 3; w++) {
-            iMag[w] = curves[w].current(fluxBase * y[w]) * inverseCurrentBase;
+            iMag[w] = magnetizing(w, y[w]);
         }
         if (neutralState) {
             v[NEUTRAL] = y[6];
@@ -326,7 +334,7 @@ public final class NetworkEquations implements OrdinaryDifferentialEquation {
         if (totalConductance > 0) {
             double num = 0;
             for (int w = 0; w < 3; w++) {
-                num += curves[w].current(fluxBase * y[w]) * inverseCurrentBase + conductance[w] * v[w];
+                num += magnetizing(w, y[w]) + conductance[w] * v[w];
             }
             return num / totalConductance;
         }
@@ -334,12 +342,28 @@ public final class NetworkEquations implements OrdinaryDifferentialEquation {
         double den = 0;
         double sum = 0;
         for (int w = 0; w < 3; w++) {
-            double slope = curves[w].currentSlope(fluxBase * y[w]) * fluxBase * inverseCurrentBase;
+            double slope = magnetizingSlope(w, y[w]);
             num += slope * v[w];
             den += slope;
-            sum += curves[w].current(fluxBase * y[w]) * inverseCurrentBase;
+            sum += magnetizing(w, y[w]);
         }
         return (num + CONSTRAINT_RATE * sum) / den;
+    }
+
+    /** Magnetizing current of winding w at per-unit flux x, per unit; linear beyond {@link #FLUX_LIMIT}. */
+    private double magnetizing(int w, double x) {
+        if (Math.abs(x) <= FLUX_LIMIT) {
+            return curves[w].current(fluxBase * x) * inverseCurrentBase;
+        }
+        double edge = Math.copySign(FLUX_LIMIT, x);
+        return (curves[w].current(fluxBase * edge) + curves[w].currentSlope(fluxBase * edge) * fluxBase * (x - edge))
+                * inverseCurrentBase;
+    }
+
+    /** d(current)/d(flux) of winding w at per-unit flux x, per unit. */
+    private double magnetizingSlope(int w, double x) {
+        double c = Math.max(-FLUX_LIMIT, Math.min(FLUX_LIMIT, x));
+        return curves[w].currentSlope(fluxBase * c) * fluxBase * inverseCurrentBase;
     }
 
     /**

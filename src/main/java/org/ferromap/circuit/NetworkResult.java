@@ -19,6 +19,7 @@ import org.ferromap.errors.MessageKey;
  * @param peakOpenPhaseVoltage largest |v| from node to ground over the recorded window among the
  *        phases whose pole is open at the end, V; NaN when every pole stayed closed
  * @param finalState the SI state at the end of the run
+ * @param evaluations right-hand-side evaluations the integrator spent (a cost figure)
  */
 public record NetworkResult(
         StateLayout layout,
@@ -29,7 +30,8 @@ public record NetworkResult(
         double[] strobeTimes,
         double[][] strobes,
         double peakOpenPhaseVoltage,
-        double[] finalState) {
+        double[] finalState,
+        int evaluations) {
 
     /** The recorded waveform of the named component ("v_a", "lambda_ab", ...), SI. */
     public double[] waveform(String name) {

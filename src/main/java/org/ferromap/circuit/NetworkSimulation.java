@@ -128,7 +128,7 @@ public final class NetworkSimulation {
             }
         }
         return new NetworkResult(layout, network.period(), openedAt, time, waveforms, strobeTimes, strobes, peak,
-                layout.toSi(end.getPrimaryState()));
+                layout.toSi(end.getPrimaryState()), integrator.getEvaluations());
     }
 
     private static double[][] toSi(StateLayout layout, double[][] rows) {
