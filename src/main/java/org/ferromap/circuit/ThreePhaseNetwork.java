@@ -29,12 +29,20 @@ import org.ferromap.errors.MessageKey;
  * {@code neutralCapacitance = 0} (the default) it is treated as a node that carries no charge:
  * its voltage follows from the current balance at every instant (see {@link NetworkEquations}),
  * which is the exact limit of a vanishing stray capacitance and adds no fast dynamics of its own.
- * A positive value models a stray capacitance from the neutral to ground as one more state;
- * physically it is of the order of the winding's capacitance to the tank, far below the cable's,
- * and {@link #SUGGESTED_NEUTRAL_FRACTION} of Ccs is a value whose effect stays below 0.1 % (the
- * network tests show this) while keeping the integration affordable. A small stray capacitance
- * makes the equations stiff, the smaller the stiffer (its charging time constant against the core
- * loss), which is why the quasi-static neutral is the default.
+ * A positive value models a stray capacitance from the neutral to ground as one more state.
+ * Physically it is of the order of the winding's capacitance to the tank, far below the cable's;
+ * {@link #SUGGESTED_NEUTRAL_FRACTION} of Ccs is a value whose effect stays near 0.02 % of the
+ * open-phase voltage (the network tests show halving, doubling or removing it moves the peak by
+ * less than 0.1 %). A stray capacitance makes the equations stiff (it charges through the core-loss
+ * resistance in 1/(3 G/Cn), and rings against the saturated windings), the smaller the stiffer:
+ * at 1e-3 Ccs the explicit integrator needs several times the steps of the quasi-static neutral,
+ * which is why the quasi-static neutral is the default.
+ *
+ * <p><b>Cost note.</b> Even without stray capacitance, an ungrounded wye with core loss has one
+ * fast mode: the common (zero-sequence) flux of the three windings relaxes at R/L, which for a
+ * saturated core and a high core-loss resistance is thousands of times the source frequency. The
+ * explicit integrator follows it with short steps during saturation: accuracy is kept, run time
+ * grows (up to some 1e5 evaluations per period for R/X_m ~ 200 in deep saturation).
  *
  * <p>SI throughout. Immutable; {@code withX} methods return changed copies.
  *
@@ -63,12 +71,12 @@ public record ThreePhaseNetwork(
 
     /**
      * A suggested neutral stray capacitance as a fraction of Ccs, for studies that want the
-     * neutral as a state: 1e-4. Small enough that halving or doubling it moves the open-phase
-     * voltage by far less than 0.1 % (shown in the tests), large enough to keep the neutral's
-     * own oscillation at some hundred times the source frequency in the unsaturated core.
+     * neutral as a state: 1e-3. Small enough that halving, doubling or removing it moves the
+     * open-phase voltage by less than 0.1 % (shown in the network tests), large enough to keep the
+     * added stiffness moderate (each halving roughly doubles the integration cost).
      * A modelling choice, no source.
      */
-    public static final double SUGGESTED_NEUTRAL_FRACTION = 1e-4;
+    public static final double SUGGESTED_NEUTRAL_FRACTION = 1e-3;
 
     public ThreePhaseNetwork {
         requireFinitePositive("omega", omega, "rad/s");
