@@ -111,6 +111,46 @@ class ThreePhaseReductionTest {
     }
 
     /**
+     * Grounded wye, two phases opened together from the energized bank: the table's "each" loop
+     * is exact only while the two open phases share one state. After a real opening they start
+     * apart (different source values and fluxes) and, each being bistable, may settle in different
+     * states (one ferroresonant, one not) held apart through the Ccc between them. Prints both
+     * open phases' settled peaks against the symmetric loop's (started from the average of the two
+     * at the opening); asserts only that the largest stays within a factor 3 of the loop's, since
+     * no source gives the discrepancy.
+     */
+    @ParameterizedTest
+    @ValueSource(doubles = {3.0, 10.0})
+    void groundedWyeTwoOpenAfterARealOpeningNeedNotStaySymmetric(double km) {
+        double ccs = 0.25e-6 * km;
+        double r = 0.3;
+        double rc = 1e5;
+        ThreePhaseNetwork net = ThreePhaseNetwork.of(W, E, ccs, r * ccs, Connection.GROUNDED_WYE,
+                WindingBranch.withLoss(WYE_CURVE, rc)).withSourceAngle(PHI);
+        double t0 = 0.0123;
+        int periods = 100;
+        NetworkResult res = NetworkSimulation.run(net, SwitchPlan.openAt(t0, 1, 2),
+                settings(periods).withRecordedPeriods(5).withSamplesPerPeriod(256));
+        double th = W * t0 + PHI;
+        double v0 = 0.5 * E * (Math.sin(th - 2 * Math.PI / 3) + Math.sin(th + 2 * Math.PI / 3));
+        double l0 = -0.5 * LR * (Math.cos(th - 2 * Math.PI / 3) + Math.cos(th + 2 * Math.PI / 3));
+        ReducedLoop loop = new ReducedLoop(W, r * ccs, ccs, 1 / rc, E, PHI, 0, 0, WYE_CURVE::current);
+        DenseOutputModel m = loop.integrate(t0, l0, v0, periods * res.period(), 1e-11, 1e-9);
+        double pb = 0;
+        double pc = 0;
+        double pl = 0;
+        for (int j = 0; j < res.time().length; j++) {
+            pb = Math.max(pb, Math.abs(res.waveform("v_b")[j]));
+            pc = Math.max(pc, Math.abs(res.waveform("v_c")[j]));
+            pl = Math.max(pl, Math.abs(m.getInterpolatedState(res.time()[j]).getPrimaryState()[1]));
+        }
+        System.out.printf("grounded wye 2 open, %.0f km, real opening: settled peaks v_b %.3f pu, v_c %.3f pu;"
+                + " symmetric loop %.3f pu%n", km, pb / E, pc / E, pl / E);
+        double ratio = Math.max(pb, pc) / pl;
+        assertTrue(ratio < 3 && ratio > 1.0 / 3, "same order of magnitude");
+    }
+
+    /**
      * Ungrounded wye, two phases open and symmetric, lossless: the loop is Cs = 2 Ccc to e_a,
      * Cg = 2 Ccs, and the composite branch lambda_eq(I) = lambda(I) + lambda(I/2) from the pair
      * node back to e_a (the pair's windings in parallel, in series with winding a). Exact only
