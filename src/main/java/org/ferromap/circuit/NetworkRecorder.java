@@ -8,17 +8,22 @@ import org.hipparchus.ode.sampling.ODEStepHandler;
  * Step handler that records a network run (kept apart from the solving): a stroboscopic sample at
  * every tau = 2 pi k from the run's start, and waveform samples at a fixed rate over the last
  * periods. Reads the dense output of each step only at the requested instants, so the cost does
- * not grow with the number of integration steps. Per-unit states are stored as they are; the
- * simulation converts to SI once at the end.
+ * not grow with the number of integration steps. Besides the state, each sample keeps the three
+ * winding voltages, read from the dense output's derivative (d lambda_w / d tau is the winding
+ * voltage in per unit), so the voltage across an ungrounded-wye winding is known even when the
+ * neutral is not a state. Per-unit values are stored as they are; the simulation converts to SI
+ * once at the end.
  */
 final class NetworkRecorder implements ODEStepHandler {
 
     private final int dimension;
     private final double strobeStep;
     private final double[][] strobes;
+    private final double[][] strobeWinding;
     private final double windowStart;
     private final double sampleStep;
     private final double[][] samples;
+    private final double[][] sampleWinding;
     private int nextStrobe;
     private int nextSample;
 
@@ -32,9 +37,11 @@ final class NetworkRecorder implements ODEStepHandler {
         this.dimension = dimension;
         this.strobeStep = 2 * Math.PI;
         this.strobes = new double[dimension][periods + 1];
+        this.strobeWinding = new double[3][periods + 1];
         this.windowStart = 2 * Math.PI * (periods - recordedPeriods);
         this.sampleStep = 2 * Math.PI / samplesPerPeriod;
         this.samples = new double[dimension][samplesPerPeriod * recordedPeriods + 1];
+        this.sampleWinding = new double[3][samples[0].length];
     }
 
     @Override
@@ -49,17 +56,23 @@ final class NetworkRecorder implements ODEStepHandler {
         // a sample that rounding puts a hair past the last step end still belongs to it
         double slack = 1e-9 * sampleStep;
         while (nextStrobe < strobes[0].length && nextStrobe * strobeStep <= tEnd + slack) {
-            store(interpolator, Math.min(nextStrobe * strobeStep, tEnd), strobes, nextStrobe++);
+            store(interpolator, Math.min(nextStrobe * strobeStep, tEnd), strobes, strobeWinding, nextStrobe++);
         }
         while (nextSample < samples[0].length && windowStart + nextSample * sampleStep <= tEnd + slack) {
-            store(interpolator, Math.min(windowStart + nextSample * sampleStep, tEnd), samples, nextSample++);
+            store(interpolator, Math.min(windowStart + nextSample * sampleStep, tEnd), samples, sampleWinding,
+                    nextSample++);
         }
     }
 
-    private void store(ODEStateInterpolator interpolator, double tau, double[][] into, int column) {
-        double[] y = interpolator.getInterpolatedState(tau).getPrimaryState();
+    private void store(ODEStateInterpolator interpolator, double tau, double[][] into, double[][] winding, int column) {
+        ODEStateAndDerivative s = interpolator.getInterpolatedState(tau);
+        double[] y = s.getPrimaryState();
         for (int i = 0; i < dimension; i++) {
             into[i][column] = y[i];
+        }
+        double[] yDot = s.getPrimaryDerivative();
+        for (int w = 0; w < 3; w++) {
+            winding[w][column] = yDot[w];
         }
     }
 
@@ -74,5 +87,13 @@ final class NetworkRecorder implements ODEStepHandler {
 
     double[][] samples() {
         return samples;
+    }
+
+    double[][] strobeWindingVoltages() {
+        return strobeWinding;
+    }
+
+    double[][] sampleWindingVoltages() {
+        return sampleWinding;
     }
 }

@@ -14,8 +14,11 @@ import org.ferromap.errors.MessageKey;
  * @param openingTimes instant each pole opened, s; NaN for a pole that stayed closed
  * @param time sample instants of the recorded window, s
  * @param waveforms [component][sample], SI (Wb-turn for flux linkages, V for voltages)
+ * @param windingVoltages [winding][sample], V: the voltage across each winding (its flux
+ *        linkage's derivative), in the windings' order of the layout
  * @param strobeTimes k T for k = 0 .. periods, s
  * @param strobes [component][k], SI: the state once per period
+ * @param strobeWindingVoltages [winding][k], V: the winding voltages once per period
  * @param peakOpenPhaseVoltage largest |v| from node to ground over the recorded window among the
  *        phases whose pole is open at the end, V; NaN when every pole stayed closed
  * @param finalState the SI state at the end of the run
@@ -27,8 +30,10 @@ public record NetworkResult(
         double[] openingTimes,
         double[] time,
         double[][] waveforms,
+        double[][] windingVoltages,
         double[] strobeTimes,
         double[][] strobes,
+        double[][] strobeWindingVoltages,
         double peakOpenPhaseVoltage,
         double[] finalState,
         int evaluations) {
@@ -41,6 +46,27 @@ public record NetworkResult(
     /** The stroboscopic samples of the named component, SI. */
     public double[] strobe(String name) {
         return strobes[index(name)];
+    }
+
+    /** Largest |value| of the named component over the recorded window, SI. */
+    public double peak(String name) {
+        double m = 0;
+        for (double x : waveform(name)) {
+            m = Math.max(m, Math.abs(x));
+        }
+        return m;
+    }
+
+    /**
+     * Largest |voltage| across winding w (0, 1, 2 in layout order) over the recorded window, V.
+     * For an ungrounded wye this is what saturates the core, not the node's voltage to ground.
+     */
+    public double peakWindingVoltage(int w) {
+        double m = 0;
+        for (double x : windingVoltages[w]) {
+            m = Math.max(m, Math.abs(x));
+        }
+        return m;
     }
 
     /** Whether pole {@code phase} is open at the end of the run. */

@@ -127,7 +127,10 @@ public final class NetworkSimulation {
                 peak = Double.isNaN(peak) ? m : Math.max(peak, m);
             }
         }
-        return new NetworkResult(layout, network.period(), openedAt, time, waveforms, strobeTimes, strobes, peak,
+        double vBase = network.perUnit().voltage();
+        return new NetworkResult(layout, network.period(), openedAt, time, waveforms,
+                scale(recorder.sampleWindingVoltages(), vBase), strobeTimes, strobes,
+                scale(recorder.strobeWindingVoltages(), vBase), peak,
                 layout.toSi(end.getPrimaryState()), integrator.getEvaluations());
     }
 
@@ -135,6 +138,17 @@ public final class NetworkSimulation {
         double[][] out = new double[rows.length][];
         for (int i = 0; i < rows.length; i++) {
             double s = layout.scale(i);
+            out[i] = new double[rows[i].length];
+            for (int j = 0; j < rows[i].length; j++) {
+                out[i][j] = rows[i][j] * s;
+            }
+        }
+        return out;
+    }
+
+    private static double[][] scale(double[][] rows, double s) {
+        double[][] out = new double[rows.length][];
+        for (int i = 0; i < rows.length; i++) {
             out[i] = new double[rows[i].length];
             for (int j = 0; j < rows[i].length; j++) {
                 out[i][j] = rows[i][j] * s;
