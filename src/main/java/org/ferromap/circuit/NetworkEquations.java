@@ -33,6 +33,8 @@ import org.hipparchus.ode.OrdinaryDifferentialEquation;
  * constraint on the flux linkages; v_n is then chosen so that the constraint's derivative holds
  * and any drift decays at {@link #CONSTRAINT_RATE} per unit time:
  * sum_w i_w'(lambda_w) (v_w - v_n) = -CONSTRAINT_RATE * sum_w i_w(lambda_w).
+ * With a stray capacitance Cn the neutral is a state instead: Cn dv_n/dtau = sum of the winding
+ * currents into it.
  *
  * <p>Mutable in its pole states and scratch arrays: one instance per integration, not shared
  * between threads. Poles only open (closing needs a prestrike model not built here).
@@ -44,8 +46,8 @@ public final class NetworkEquations implements OrdinaryDifferentialEquation {
 
     /**
      * Flux linkage, per unit of E/omega, beyond which the magnetizing curves continue linearly with
-     * their slope there. No trajectory of the network gets near it (it takes 50 radians of full
-     * source voltage of one sign); only a rejected trial step of the integrator does, and there a
+     * their slope there. No trajectory of the network gets near it (it takes tens of radians of
+     * several per unit of one sign); only a rejected trial step of the integrator does, and there a
      * polynomial curve would overflow to infinity and NaN, which the integrator cannot reject.
      */
     static final double FLUX_LIMIT = 50.0;
@@ -81,7 +83,6 @@ public final class NetworkEquations implements OrdinaryDifferentialEquation {
     private int closedMask = 7;
 
     // scratch, reused every evaluation
-    private final double[] e = new double[3];
     private final double[] de = new double[3];
     private final double[] v = new double[4];
     private final double[] iMag = new double[3];
@@ -270,7 +271,6 @@ public final class NetworkEquations implements OrdinaryDifferentialEquation {
         for (int k = 0; k < 3; k++) {
             double s = Math.sin(tau + angle[k]);
             double c = Math.cos(tau + angle[k]);
-            e[k] = s;
             de[k] = c;
             v[k] = (closedMask & (1 << k)) != 0 ? s : y[3 + k];
         }

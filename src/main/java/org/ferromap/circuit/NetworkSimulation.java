@@ -26,9 +26,14 @@ public final class NetworkSimulation {
     private NetworkSimulation() {
     }
 
-    /** Runs {@code periods} source periods with relative tolerance {@code rtol}, other settings at their defaults. */
+    /**
+     * Runs {@code periods} source periods with relative tolerance {@code rtol} and the same value
+     * as absolute tolerance in per unit (every state is of order one there), other settings at
+     * their defaults.
+     */
     public static NetworkResult run(ThreePhaseNetwork network, SwitchPlan plan, int periods, double rtol) {
-        return run(network, plan, NetworkSimulationSettings.defaults().withPeriods(periods).withRelativeTolerance(rtol));
+        return run(network, plan, NetworkSimulationSettings.defaults().withPeriods(periods).withRelativeTolerance(rtol)
+                .withAbsoluteTolerance(rtol));
     }
 
     /** Runs with the given settings from the energized bank at t = 0. */

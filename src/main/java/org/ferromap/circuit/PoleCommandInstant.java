@@ -16,7 +16,7 @@ import org.hipparchus.ode.events.ODEEventHandler;
 public final class PoleCommandInstant implements ODEEventDetector {
 
     private final double commandTau;
-    private final double threshold;
+    private final BracketedUnivariateSolver<UnivariateFunction> solver;
     private final PoleOpener opener;
 
     /**
@@ -27,7 +27,7 @@ public final class PoleCommandInstant implements ODEEventDetector {
      */
     public PoleCommandInstant(NetworkEquations equations, int phase, double commandTau, double threshold) {
         this.commandTau = commandTau;
-        this.threshold = threshold;
+        this.solver = new BracketingNthOrderBrentSolver(0.0, threshold, 0.0, 5);
         this.opener = new PoleOpener(equations, phase, commandTau);
     }
 
@@ -49,7 +49,7 @@ public final class PoleCommandInstant implements ODEEventDetector {
 
     @Override
     public BracketedUnivariateSolver<UnivariateFunction> getSolver() {
-        return new BracketingNthOrderBrentSolver(0.0, threshold, 0.0, 5);
+        return solver;
     }
 
     @Override

@@ -18,7 +18,7 @@ public final class PoleCurrentZero implements ODEEventDetector {
 
     private final NetworkEquations equations;
     private final int phase;
-    private final double threshold;
+    private final BracketedUnivariateSolver<UnivariateFunction> solver;
     private final double maxCheck;
     private final Opener opener;
     private double signAfterOpening = 1.0;
@@ -34,7 +34,7 @@ public final class PoleCurrentZero implements ODEEventDetector {
     public PoleCurrentZero(NetworkEquations equations, int phase, double commandTau, double threshold, double maxCheck) {
         this.equations = equations;
         this.phase = phase;
-        this.threshold = threshold;
+        this.solver = new BracketingNthOrderBrentSolver(0.0, threshold, 0.0, 5);
         this.maxCheck = maxCheck;
         this.opener = new Opener(equations, phase, commandTau);
     }
@@ -59,7 +59,7 @@ public final class PoleCurrentZero implements ODEEventDetector {
 
     @Override
     public BracketedUnivariateSolver<UnivariateFunction> getSolver() {
-        return new BracketingNthOrderBrentSolver(0.0, threshold, 0.0, 5);
+        return solver;
     }
 
     @Override

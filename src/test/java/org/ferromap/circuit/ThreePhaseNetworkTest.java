@@ -124,6 +124,18 @@ class ThreePhaseNetworkTest {
         }
     }
 
+    /** A pole commanded at t = 0 is open from the start, its node starting on the source value e_a(0) = E sin(phi). */
+    @Test
+    void poleCommandedAtTheStartIsOpenFromTheStart() {
+        ThreePhaseNetwork net = ThreePhaseNetwork.of(W, E, 0.5e-6, 0.15e-6, Connection.GROUNDED_WYE,
+                WindingBranch.withLoss(new LinearCurve(15), 2e4)).withSourceAngle(PHI);
+        NetworkResult res = NetworkSimulation.run(net, SwitchPlan.openAt(0.0, 0), 2, 1e-9);
+        assertEquals(0.0, res.openingTimes()[0]);
+        assertEquals(E * Math.sin(PHI), res.strobe("v_a")[0], 1e-12 * E);
+        // open from the start: it no longer follows the source one period later
+        assertTrue(Math.abs(res.strobe("v_a")[1] - E * Math.sin(PHI)) > 1e-3 * E);
+    }
+
     /**
      * Lossless linear network with every pole open: no source, no loss, so the stored energy
      * 1/2 v^T C v + sum lambda^2/(2 L) is conserved [der: the network is a lossless LC circuit].
