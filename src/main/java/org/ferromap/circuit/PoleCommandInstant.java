@@ -28,7 +28,9 @@ public final class PoleCommandInstant implements ODEEventDetector {
     public PoleCommandInstant(NetworkEquations equations, int phase, double commandTau, double threshold) {
         this.commandTau = commandTau;
         this.solver = new BracketingNthOrderBrentSolver(0.0, threshold, 0.0, 5);
-        this.opener = new PoleOpener(equations, phase, commandTau);
+        // g only crosses zero at the command, so the handler needs no time gate of its own (the
+        // located root may sit a threshold's width either side of the command)
+        this.opener = new PoleOpener(equations, phase, Double.NEGATIVE_INFINITY);
     }
 
     @Override

@@ -36,7 +36,8 @@ public final class PoleCurrentZero implements ODEEventDetector {
         this.phase = phase;
         this.solver = new BracketingNthOrderBrentSolver(0.0, threshold, 0.0, 5);
         this.maxCheck = maxCheck;
-        this.opener = new Opener(equations, phase, commandTau);
+        // a zero located within the event threshold before the command counts as at the command
+        this.opener = new Opener(equations, phase, commandTau - threshold);
     }
 
     @Override
