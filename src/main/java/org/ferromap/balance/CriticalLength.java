@@ -72,55 +72,78 @@ public final class CriticalLength {
             }
         }
         if (first < 0) {
-            return new CriticalLengthResult(Double.NaN, Double.NaN, Double.NaN, sourcePeak,
+            return new CriticalLengthResult(Double.NaN, Double.NaN, Double.NaN, Double.NaN, sourcePeak,
                     "no fold pair for lengths in [" + minLength + ", " + maxLength + "]: no jump at any source voltage");
         }
         DoubleUnaryOperator indicator = l -> balance.cuspIndicator(circuitAtLength.apply(l));
         double cusp = first == 0 ? minLength : root(indicator, ls[first - 1], ls[first]);
-        double down = crossing(circuitAtLength, ls, ind, 1, sourcePeak, indicator);
-        double up = crossing(circuitAtLength, ls, ind, 0, sourcePeak, indicator);
+        double[] down = crossing(circuitAtLength, ls, ind, 1, sourcePeak, indicator);
+        double[] up = crossing(circuitAtLength, ls, ind, 0, sourcePeak, indicator);
         String note;
-        if (Double.isNaN(down)) {
+        if (Double.isNaN(down[0])) {
             note = "bistable from the cusp length on, but both folds stay above the source voltage in the range";
-        } else if (Double.isNaN(up)) {
+        } else if (Double.isNaN(up[0])) {
             note = "a ferroresonant state exists at the source from the jump-down length; the normal state survives the whole range";
         } else {
-            note = "the normal state is lost at the jump-up length" + (first == 0 ? " (already bistable at the shortest length)" : "");
+            note = "the normal state is lost from the jump-up length" + (Double.isNaN(up[1]) ? " to the end of the range"
+                    : " until the jump-up exit length") + (first == 0 ? " (already bistable at the shortest length)" : "");
         }
-        return new CriticalLengthResult(cusp, down, up, sourcePeak, note);
+        return new CriticalLengthResult(cusp, down[0], up[0], up[1], sourcePeak, note);
     }
 
-    /** Shortest scanned-and-refined length where fold j (0 up, 1 down) is at or below the source. */
-    private double crossing(DoubleFunction<EquivalentCircuit> at, double[] ls, double[] ind, int j, double fixedSource,
-                            DoubleUnaryOperator indicator) {
+    /**
+     * First interval of lengths where fold j (0 up, 1 down) is at or below the source:
+     * {entry, exit}, NaN where not found.
+     */
+    private double[] crossing(DoubleFunction<EquivalentCircuit> at, double[] ls, double[] ind, int j, double fixedSource,
+                              DoubleUnaryOperator indicator) {
         DoubleUnaryOperator excess = l -> {
             EquivalentCircuit c = at.apply(l);
             double e = Double.isNaN(fixedSource) ? c.sourcePeak() : fixedSource;
             return balance.foldSourcesContinued(c)[j] - e;
         };
-        for (int k = 0; k < ls.length; k++) {
-            if (!(ind[k] > 0)) {
-                continue;
-            }
-            double h = excess.applyAsDouble(ls[k]);
-            if (h > 0) {
-                continue;
-            }
-            if (k == 0) {
-                return ls[0];
-            }
-            if (ind[k - 1] > 0) {
-                return root(excess, ls[k - 1], ls[k]);
-            }
-            // The fold pair is born between the two lengths.
-            double cusp = root(indicator, ls[k - 1], ls[k]);
-            double hc = excess.applyAsDouble(cusp);
-            if (!(hc > 0)) {
-                return cusp;
-            }
-            return root(excess, cusp, ls[k]);
+        int m = ls.length;
+        boolean[] below = new boolean[m];
+        for (int k = 0; k < m; k++) {
+            below[k] = ind[k] > 0 && !(excess.applyAsDouble(ls[k]) > 0);
         }
-        return Double.NaN;
+        int in = -1;
+        for (int k = 0; k < m; k++) {
+            if (below[k]) {
+                in = k;
+                break;
+            }
+        }
+        if (in < 0) {
+            return new double[] {Double.NaN, Double.NaN};
+        }
+        double entry = in == 0 ? ls[0] : change(excess, indicator, ls[in - 1], ls[in], ind[in - 1] > 0, true);
+        double exit = Double.NaN;
+        for (int k = in + 1; k < m; k++) {
+            if (!below[k]) {
+                exit = change(excess, indicator, ls[k - 1], ls[k], ind[k] > 0, false);
+                break;
+            }
+        }
+        return new double[] {entry, exit};
+    }
+
+    /**
+     * Where the fold-below-source condition changes between lengths a and b. When the far side
+     * of the change is not bistable the fold pair is born (or vanishes) in between: the change is
+     * at that cusp if the pair appears (or disappears) below the source, else past it.
+     */
+    private double change(DoubleUnaryOperator excess, DoubleUnaryOperator indicator, double a, double b,
+                          boolean otherSideBistable, boolean entering) {
+        if (otherSideBistable) {
+            return root(excess, a, b);
+        }
+        double cusp = root(indicator, a, b);
+        double hc = excess.applyAsDouble(cusp);
+        if (!(hc > 0)) {
+            return cusp;
+        }
+        return entering ? root(excess, cusp, b) : root(excess, a, cusp);
     }
 
     private static double root(DoubleUnaryOperator f, double a, double b) {
