@@ -10,7 +10,7 @@ import org.ferromap.equipment.SaturationCurve;
  * Test-only smooth saturation curve with an air-core asymptote, defined through its inverse:
  * lambda(i) = Lair i + (2 Ls / pi) atan(pi (Lu - Lair) i / (2 Ls)). Slope Lu at the origin, Lair
  * in deep saturation, knee near flux Ls. Current by Newton inversion; the describing function by
- * Commons Math Gauss-Legendre quadrature, 8 panels of 32 points over the quarter period (an
+ * Commons Math Gauss-Legendre quadrature, 32 panels of 24 points over the quarter period (an
  * algorithm independent of the code under test; smooth integrand, converged to ~1e-14).
  * Exists only to drive the numerical, non-polynomial paths.
  */
@@ -19,12 +19,12 @@ final class ArctanKneeCurve implements SaturationCurve {
     private final double lu;
     private final double lair;
     private final double ls;
-    private static final GaussIntegrator[] PANELS = new GaussIntegrator[8];
+    private static final GaussIntegrator[] PANELS = new GaussIntegrator[32];
 
     static {
         GaussIntegratorFactory f = new GaussIntegratorFactory();
         for (int k = 0; k < PANELS.length; k++) {
-            PANELS[k] = f.legendre(32, 0.5 * Math.PI * k / PANELS.length, 0.5 * Math.PI * (k + 1) / PANELS.length);
+            PANELS[k] = f.legendre(24, 0.5 * Math.PI * k / PANELS.length, 0.5 * Math.PI * (k + 1) / PANELS.length);
         }
     }
 
