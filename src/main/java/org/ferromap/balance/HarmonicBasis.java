@@ -271,7 +271,7 @@ public final class HarmonicBasis {
         double h = 2 * Math.PI / m;
         double t0 = 2 * Math.PI * bj / m;
         LocalMinimum lm = new LocalMinimum();
-        lm.minimize(t -> -Math.abs(evaluate(x, t, derivative)), t0 - h, t0 + h, 1e-12, 200);
+        lm.minimize(t -> -Math.abs(evaluate(x, t, derivative)), t0 - h, t0 + h, 1e-12, 1e-12, 200);
         return Math.max(best, -lm.lastValue());
     }
 }

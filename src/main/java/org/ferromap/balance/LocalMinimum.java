@@ -18,8 +18,11 @@ final class LocalMinimum {
         return lastValue;
     }
 
-    /** Abscissa of a local minimum of f in [a, b], to relative accuracy {@code rel} (at least ~1e-8 is meaningful). */
-    double minimize(DoubleUnaryOperator f, double a, double b, double rel, int maxEvaluations) {
+    /**
+     * Abscissa of a local minimum of f in [a, b], to about rel |x| + abs (below ~1e-8 relative
+     * only the value, not the abscissa, improves).
+     */
+    double minimize(DoubleUnaryOperator f, double a, double b, double rel, double abs, int maxEvaluations) {
         double x = a + GOLDEN * (b - a);
         double w = x;
         double v = x;
@@ -30,7 +33,7 @@ final class LocalMinimum {
         double e = 0;
         for (int it = 0; it < maxEvaluations; it++) {
             double m = 0.5 * (a + b);
-            double tol1 = rel * Math.abs(x) + 1e-300;
+            double tol1 = rel * Math.abs(x) + abs;
             double tol2 = 2 * tol1;
             if (Math.abs(x - m) <= tol2 - 0.5 * (b - a)) {
                 break;

@@ -111,7 +111,7 @@ public final class SingleHarmonicBalance {
             rMin = bestR;
             if (best > 0 && best < xs.length - 1) {
                 double u = lm.minimize(t -> foldLocusLower(b, Math.exp(t)),
-                        Math.log(xs[best - 1]), Math.log(xs[best + 1]), 1e-10, 200);
+                        Math.log(xs[best - 1]), Math.log(xs[best + 1]), 1e-10, 1e-10, 200);
                 if (lm.lastValue() <= bestR) {
                     xStar = Math.exp(u);
                     rMin = lm.lastValue();
@@ -135,7 +135,7 @@ public final class SingleHarmonicBalance {
             lm.minimize(t -> {
                 double x = Math.exp(t);
                 return -(1 - b.n1(x)) * (b.slope(x) - 1);
-            }, Math.log(xs[bestQk - 1]), Math.log(xs[bestQk + 1]), 1e-10, 200);
+            }, Math.log(xs[bestQk - 1]), Math.log(xs[bestQk + 1]), 1e-10, 1e-10, 200);
             bestQ = Math.max(bestQ, -lm.lastValue());
         }
         double gMin = Math.sqrt(bestQ);
@@ -223,7 +223,7 @@ public final class SingleHarmonicBalance {
             lm.minimize(t -> {
                 double x = Math.exp(t);
                 return -(1 - b.n1(x)) * (b.slope(x) - 1);
-            }, Math.log(xs[bk - 1]), Math.log(xs[bk + 1]), 1e-10, 200);
+            }, Math.log(xs[bk - 1]), Math.log(xs[bk + 1]), 1e-10, 1e-10, 200);
             best = Math.max(best, -lm.lastValue());
         }
         return best - b.g * b.g;
@@ -271,7 +271,7 @@ public final class SingleHarmonicBalance {
                 x = Math.exp(lm.minimize(t -> {
                     double y = Math.exp(t);
                     return -(1 - b.n1(y)) * (b.slope(y) - 1);
-                }, Math.log(xs[bk - 1]), Math.log(xs[bk + 1]), 1e-10, 200));
+                }, Math.log(xs[bk - 1]), Math.log(xs[bk + 1]), 1e-10, 1e-10, 200));
             }
         }
         double e = b.sourceAt(x);
@@ -381,7 +381,7 @@ public final class SingleHarmonicBalance {
             } else if (k > 0 && isNearTouch(ds, k)) {
                 // A fold pair closer than one grid step (near the cusp): look for the extremum of det.
                 double sign = ds[k] > 0 ? 1 : -1;
-                double u = lm.minimize(t -> sign * b.det(Math.exp(t)), Math.log(xs[k - 1]), Math.log(xs[k + 1]), 1e-12, 200);
+                double u = lm.minimize(t -> sign * b.det(Math.exp(t)), Math.log(xs[k - 1]), Math.log(xs[k + 1]), 1e-12, 1e-12, 200);
                 if (lm.lastValue() < 0) {
                     double xm = Math.exp(u);
                     if (count + 2 > roots.length) {
