@@ -398,7 +398,7 @@ class MultiHarmonicBalanceTest {
             ode.integrate(odeOf(c), 0, zp, period, yp);
             ode.integrate(odeOf(c), 0, zm, period, ym);
             for (int row = 0; row < 2; row++) {
-                m[2 * row + col] = (yp[row] - ym[row]) / (2 * h) * (col == row ? 1 : 1);
+                m[2 * row + col] = (yp[row] - ym[row]) / (2 * h);
             }
         }
         return m;
