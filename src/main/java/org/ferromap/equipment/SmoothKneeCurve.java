@@ -1,26 +1,146 @@
 package org.ferromap.equipment;
 
+import java.util.ArrayList;
 import java.util.List;
+import org.ferromap.errors.FerromapException;
+import org.ferromap.errors.MessageKey;
 
 /**
- * Smooth knee with an air-core asymptote: lambda(i) = L_air i + Lambda_s tanh((L_u - L_air) i / Lambda_s) (DOMAIN.md §2, common practice).
+ * Smooth knee with an air-core asymptote: lambda(i) = L_air i + Lambda_s tanh((L_u - L_air) i / Lambda_s)
+ * (DOMAIN.md §2, common practice). Slope L_u at the origin, L_air in deep saturation, the knee
+ * near Lambda_s.
  *
- * <p>STUB: signature fixed, implementation pending (curves work item).
+ * <p>The flux is explicit in the current; the current is found by a safeguarded Newton inversion
+ * in the scaled variables y = lambda / Lambda_s, z = (L_u - L_air) i / Lambda_s, where
+ * y(z) = rho z + tanh z with rho = L_air / (L_u - L_air). y(z) is increasing and concave for z &gt; 0,
+ * so Newton started from a lower bound climbs monotonically to the root.
  */
-public final class SmoothKneeCurve implements SaturationCurve {
+public final class SmoothKneeCurve implements SaturationCurve, KinkedCurve {
+
+    private final double lu;
+    private final double lair;
+    private final double lambdaS;
+    /** L_air / (L_u - L_air), dimensionless. */
+    private final double rho;
+    /** Current per unit of z, A: Lambda_s / (L_u - L_air). */
+    private final double currentUnit;
+    private final MonotoneInversion.Increasing scaled;
 
     /**
      * @param unsaturatedInductance L_u, H, slope at the origin
      * @param airCoreInductance L_air, H, 0 &lt; L_air &lt; L_u
      * @param saturationFlux Lambda_s, Wb-turn, &gt; 0
      */
-    public SmoothKneeCurve(double unsaturatedInductance, double airCoreInductance, double saturationFlux) { }
+    public SmoothKneeCurve(double unsaturatedInductance, double airCoreInductance, double saturationFlux) {
+        lu = CurveChecks.positive(unsaturatedInductance, "unsaturated inductance", "H");
+        lair = CurveChecks.positive(airCoreInductance, "air-core inductance", "H");
+        lambdaS = CurveChecks.positive(saturationFlux, "saturation flux", "Wb-turn");
+        if (!(lair < lu)) {
+            throw new FerromapException(MessageKey.OUT_OF_RANGE, "air-core inductance " + lair
+                    + " H must be below the unsaturated inductance " + lu + " H");
+        }
+        rho = lair / (lu - lair);
+        currentUnit = lambdaS / (lu - lair);
+        scaled = new MonotoneInversion.Increasing() {
+            @Override
+            public double value(double z) {
+                return rho * z + Math.tanh(z);
+            }
 
-    @Override public double current(double fluxLinkage) { throw new UnsupportedOperationException("pending"); }
-    @Override public double currentSlope(double fluxLinkage) { throw new UnsupportedOperationException("pending"); }
-    @Override public double fundamentalCurrent(double fluxAmplitude) { throw new UnsupportedOperationException("pending"); }
-    @Override public double fluxLinkage(double current) { throw new UnsupportedOperationException("pending"); }
-    @Override public List<CurvePoint> definingPoints() { throw new UnsupportedOperationException("pending"); }
-    @Override public double airCoreInductance() { throw new UnsupportedOperationException("pending"); }
-    @Override public String describe() { throw new UnsupportedOperationException("pending"); }
+            @Override
+            public double derivative(double z) {
+                return rho + sech2(z);
+            }
+        };
+    }
+
+    /** L_u, H. */
+    public double unsaturatedInductance() {
+        return lu;
+    }
+
+    /** Lambda_s, Wb-turn. */
+    public double saturationFlux() {
+        return lambdaS;
+    }
+
+    @Override
+    public double current(double fluxLinkage) {
+        return Math.copySign(currentUnit * scaledCurrent(Math.abs(fluxLinkage) / lambdaS), fluxLinkage);
+    }
+
+    /** From the implicit derivative: di/dlambda = 1 / (L_air + (L_u - L_air) sech^2 z). */
+    @Override
+    public double currentSlope(double fluxLinkage) {
+        double z = scaledCurrent(Math.abs(fluxLinkage) / lambdaS);
+        return 1.0 / (lair + (lu - lair) * sech2(z));
+    }
+
+    @Override
+    public double fundamentalCurrent(double fluxAmplitude) {
+        return CurveQuadrature.fundamental(this, fluxAmplitude, kinkFluxes());
+    }
+
+    @Override
+    public double fluxLinkage(double current) {
+        return lair * current + lambdaS * Math.tanh((lu - lair) * current / lambdaS);
+    }
+
+    /** 40 points evenly spaced in flux up to 2 Lambda_s: the knee and the start of the air-core line. */
+    @Override
+    public List<CurvePoint> definingPoints() {
+        List<CurvePoint> pts = new ArrayList<>(40);
+        for (int k = 1; k <= 40; k++) {
+            double f = 2 * lambdaS * k / 40.0;
+            pts.add(new CurvePoint(f, current(f)));
+        }
+        return List.copyOf(pts);
+    }
+
+    @Override
+    public double airCoreInductance() {
+        return lair;
+    }
+
+    @Override
+    public String describe() {
+        return String.format("smooth knee, L_u %.4g H, L_air %.4g H, Lambda_s %.4g Wb-turn", lu, lair, lambdaS);
+    }
+
+    /** The knee: the curvature of i(lambda) is concentrated just around Lambda_s. */
+    @Override
+    public double[] kinkFluxes() {
+        return new double[] {lambdaS};
+    }
+
+    /** z with rho z + tanh z = y, y &gt;= 0. */
+    private double scaledCurrent(double y) {
+        if (y == 0 || Double.isNaN(y)) {
+            return y;
+        }
+        // Upper bounds: tanh z >= 0, and tanh z = y - rho z <= y.
+        double hi = y / rho;
+        if (y < 1) {
+            hi = Math.min(hi, atanh(y));
+        }
+        // Lower bounds: tanh z <= z, tanh z <= 1, and tanh z = y - rho z >= y - rho hi.
+        double lo = Math.max(y / (1 + rho), (y - 1) / rho);
+        double t = y - rho * hi;
+        if (t > 0 && t < 1) {
+            lo = Math.max(lo, atanh(t));
+        }
+        lo = Math.min(lo, hi);
+        return MonotoneInversion.solve(scaled, y, lo, hi, lo);
+    }
+
+    /** sech^2 z, accurate also where tanh z rounds to 1. */
+    private static double sech2(double z) {
+        double e = Math.exp(-2 * Math.abs(z));
+        double d = 1 + e;
+        return 4 * e / (d * d);
+    }
+
+    private static double atanh(double v) {
+        return 0.5 * Math.log1p(2 * v / (1 - v));
+    }
 }
