@@ -25,6 +25,8 @@ public final class SmoothKneeCurve implements SaturationCurve, KinkedCurve {
     /** Current per unit of z, A: Lambda_s / (L_u - L_air). */
     private final double currentUnit;
     private final MonotoneInversion.Increasing scaled;
+    /** Knee marks for quadrature, Wb-turn: see {@link #kinkFluxes()}. */
+    private final double[] knee;
 
     /**
      * @param unsaturatedInductance L_u, H, slope at the origin
@@ -52,6 +54,7 @@ public final class SmoothKneeCurve implements SaturationCurve, KinkedCurve {
                 return rho + sech2(z);
             }
         };
+        knee = kneeMarks();
     }
 
     /** L_u, H. */
@@ -107,10 +110,27 @@ public final class SmoothKneeCurve implements SaturationCurve, KinkedCurve {
         return String.format("smooth knee, L_u %.4g H, L_air %.4g H, Lambda_s %.4g Wb-turn", lu, lair, lambdaS);
     }
 
-    /** The knee: the curvature of i(lambda) is concentrated just around Lambda_s. */
+    /**
+     * The knee: the fluxes where sech^2 z = rho 10^j, j = -4, -3, ..., that is where the slope
+     * di/dlambda has climbed by successive factors of about ten from 1/L_u towards 1/L_air. The
+     * change is packed into a flux band a few rho Lambda_s wide; marking it lets the quadrature
+     * split there, since a rule whose nodes all miss such a band would report a smooth answer.
+     */
     @Override
     public double[] kinkFluxes() {
-        return new double[] {lambdaS};
+        return knee.clone();
+    }
+
+    private double[] kneeMarks() {
+        double[] marks = new double[0];
+        for (int j = -4; rho * Math.pow(10, j) < 0.5; j++) {
+            double q = rho * Math.pow(10, j);
+            double w = 1 / Math.sqrt(q);
+            double z = Math.log(w + Math.sqrt((w - 1) * (w + 1)));
+            marks = java.util.Arrays.copyOf(marks, marks.length + 1);
+            marks[marks.length - 1] = lambdaS * (rho * z + Math.tanh(z));
+        }
+        return marks;
     }
 
     /** z with rho z + tanh z = y, y &gt;= 0. */
