@@ -27,6 +27,7 @@ final class MonotoneInversion {
     static double solve(Increasing f, double target, double lo, double hi, double start) {
         double x = Math.min(Math.max(start, lo), hi);
         double previousStep = hi - lo;
+        double previousResidual = Double.NaN;
         for (int it = 0; it < MAX_ITERATIONS; it++) {
             double r = f.value(x) - target;
             if (r == 0) {
@@ -37,13 +38,23 @@ final class MonotoneInversion {
             } else {
                 hi = x;
             }
-            double next = x - r / f.derivative(x);
-            // Bisect when Newton leaves the bracket or fails to halve the step (kinks, flat parts).
-            if (!(next > lo && next < hi) || Math.abs(next - x) > 0.5 * previousStep) {
+            double step = r / f.derivative(x);
+            double next = x - step;
+            // Converged: a Newton step of a few ulps. Stopping here, before any safeguard, keeps
+            // round-off in the residual from triggering a bisection of the whole bracket.
+            if (Math.abs(step) <= 4 * Math.ulp(x)) {
+                return next >= lo && next <= hi ? next : x;
+            }
+            // Bisect when Newton leaves the bracket, or when it has jumped across the root and its
+            // step fails to halve (cycling around a kink). Steps that stay on one side converge
+            // monotonically (a convex or concave stretch) and are left alone.
+            boolean crossed = previousResidual * r < 0;
+            if (!(next > lo && next < hi) || (crossed && Math.abs(next - x) > 0.5 * previousStep)) {
                 next = 0.5 * (lo + hi);
             }
             previousStep = Math.abs(next - x);
-            if (Math.abs(next - x) <= 2 * Math.ulp(next) || !(hi - lo > 2 * Math.ulp(hi))) {
+            previousResidual = r;
+            if (!(hi - lo > 2 * Math.ulp(hi))) {
                 return next;
             }
             x = next;

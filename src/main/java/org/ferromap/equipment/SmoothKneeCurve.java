@@ -13,7 +13,8 @@ import org.ferromap.errors.MessageKey;
  * <p>The flux is explicit in the current; the current is found by a safeguarded Newton inversion
  * in the scaled variables y = lambda / Lambda_s, z = (L_u - L_air) i / Lambda_s, where
  * y(z) = rho z + tanh z with rho = L_air / (L_u - L_air). y(z) is increasing and concave for z &gt; 0,
- * so Newton started from a lower bound climbs monotonically to the root.
+ * so Newton started from a lower bound climbs monotonically to the root: no bracket bookkeeping
+ * is needed, and one expm1 per step gives both tanh z and its derivative.
  */
 public final class SmoothKneeCurve implements SaturationCurve, KinkedCurve {
 
@@ -22,9 +23,11 @@ public final class SmoothKneeCurve implements SaturationCurve, KinkedCurve {
     private final double lambdaS;
     /** L_air / (L_u - L_air), dimensionless. */
     private final double rho;
+    /** Newton steps allowed; from the bounds used, a handful suffice. */
+    private static final int MAX_NEWTON = 200;
+
     /** Current per unit of z, A: Lambda_s / (L_u - L_air). */
     private final double currentUnit;
-    private final MonotoneInversion.Increasing scaled;
     /** Knee marks for quadrature, Wb-turn: see {@link #kinkFluxes()}. */
     private final double[] knee;
 
@@ -43,17 +46,6 @@ public final class SmoothKneeCurve implements SaturationCurve, KinkedCurve {
         }
         rho = lair / (lu - lair);
         currentUnit = lambdaS / (lu - lair);
-        scaled = new MonotoneInversion.Increasing() {
-            @Override
-            public double value(double z) {
-                return rho * z + Math.tanh(z);
-            }
-
-            @Override
-            public double derivative(double z) {
-                return rho + sech2(z);
-            }
-        };
         knee = kneeMarks();
     }
 
@@ -149,8 +141,21 @@ public final class SmoothKneeCurve implements SaturationCurve, KinkedCurve {
         if (t > 0 && t < 1) {
             lo = Math.max(lo, atanh(t));
         }
-        lo = Math.min(lo, hi);
-        return MonotoneInversion.solve(scaled, y, lo, hi, lo);
+        double z = Math.min(lo, hi);
+        for (int it = 0; it < MAX_NEWTON; it++) {
+            double em = Math.expm1(-2 * z);
+            double q = 2 + em;
+            // tanh z = -em / (2 + em) without cancellation at small z; sech^2 z = 4 (1 + em) / (2 + em)^2.
+            double residual = rho * z - em / q - y;
+            double step = residual / (rho + 4 * (1 + em) / (q * q));
+            z -= step;
+            // Done when the step is a few ulps of z, or the residual is down to the rounding of y:
+            // on the flat air-core stretch (slope rho) that rounding alone moves z by ulp(y) / rho.
+            if (Math.abs(step) <= 4 * Math.ulp(z) || Math.abs(residual) <= 4 * Math.ulp(y)) {
+                break;
+            }
+        }
+        return z;
     }
 
     /** sech^2 z, accurate also where tanh z rounds to 1. */
