@@ -61,8 +61,8 @@ public final class RmsTestConversion {
         }
         double loss = p / v;
         if (!(loss < i)) {
-            throw new FerromapException(MessageKey.OUT_OF_RANGE, "point " + k + ": the loss current P/V = "
-                    + loss + " A is not below the measured " + i + " A rms, so no magnetizing current is left");
+            throw new FerromapException(MessageKey.OUT_OF_RANGE, String.format("point %d: the loss current P/V = %.6g A"
+                    + " is not below the measured %.6g A rms, so no magnetizing current is left", k, loss, i));
         }
         return Math.sqrt((i - loss) * (i + loss));
     }
@@ -97,9 +97,9 @@ public final class RmsTestConversion {
         double c = known + y * y * u0 - 0.5 * Math.PI * rms * rms;
         if (!(c < 0)) {
             double floor = Math.sqrt((known + y * y * u0) / (0.5 * Math.PI));
-            throw new FerromapException(MessageKey.NOT_MONOTONE, "point " + k + ": rms current " + rms
-                    + " A (after removing the loss current) implies a non-positive slope; at that voltage it must exceed "
-                    + floor + " A, what the curve through the lower points already draws");
+            throw new FerromapException(MessageKey.NOT_MONOTONE, String.format("point %d: rms magnetizing current"
+                    + " %.6g A implies a non-positive slope; at that voltage it must exceed %.6g A, what the curve"
+                    + " through the lower points already draws", k, rms, floor));
         }
         // Positive root of a s^2 + b s + c = 0 with b >= 0, c < 0, in the form free of cancellation.
         double s = -2 * c / (b + Math.sqrt(b * b - 4 * a * c));
