@@ -40,8 +40,8 @@ public final class OperatingPointCharts {
             vi[k] = v / 1e3;
             ii[k] = m.fundamentalCurrent(v / w);
         }
-        double iTop = w * cTot * vTop + drive;
-        XYChart ch = ChartFiles.xyChart("Graphical method: " + title, "fundamental current (A peak)", "voltage across the magnetizing branch (kV peak)");
+        double iTop = w * cTot * vTop;
+        XYChart ch = ChartFiles.xyChart("Graphical method (fundamental-frequency balance)", "fundamental current (A peak)", "voltage across the magnetizing branch (kV peak)");
         XYSeries curve = ch.addSeries("magnetizing branch, fundamental", ii, vi);
         curve.setMarker(SeriesMarkers.NONE);
         curve.setLineStyle(ChartFiles.solid());
