@@ -29,7 +29,9 @@ public enum MessageKey {
     /** solver: a time integration failed (step size underflow, stiffness). */
     INTEGRATION_FAILED(false),
     /** solver: a singular linear system where a regular one was needed. */
-    SINGULAR(false);
+    SINGULAR(false),
+    /** run: stopped on request (Ctrl-C, thread interrupt) after saving the work finished so far. */
+    INTERRUPTED(false);
 
     private final boolean input;
 

@@ -1,5 +1,19 @@
 /**
- * Parameter maps: axes, grids, per-cell pure functions, executors, adaptive refinement, resumable tiles.
- * May use: balance, continuation, dynamics, orbits, circuit, equipment, units, errors.
+ * Parameter maps: a generic engine that evaluates a pure {@link org.ferromap.maps.CellFunction}
+ * over the grid of two {@link org.ferromap.maps.Axis axes}.
+ *
+ * <p>{@link org.ferromap.maps.MapRunner#run} checks memory before allocating, cuts the grid into
+ * tiles ({@link org.ferromap.maps.WorkUnit}), reuses tiles saved by an interrupted run
+ * ({@link org.ferromap.maps.TileStore}), evaluates the rest on a
+ * {@link org.ferromap.maps.CellExecutor} ({@link org.ferromap.maps.LocalPoolExecutor} here; a
+ * cluster engine can implement the same interface), optionally refines adaptively from a coarse
+ * lattice ({@link org.ferromap.maps.RefinementSettings}), and returns a
+ * {@link org.ferromap.maps.MapGrid}: one row-major double array plus a computed/inferred flag per
+ * cell. {@link org.ferromap.maps.Boundaries} finds where a category changes.
+ *
+ * <p>The engine does not depend on the physics: balance and time-domain cells are plugged in as
+ * cell functions by the layers above.
+ *
+ * <p>May use: balance, continuation, dynamics, orbits, circuit, equipment, units, errors.
  */
 package org.ferromap.maps;
