@@ -1,0 +1,229 @@
+package org.ferromap.orbits;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.Optional;
+import java.util.function.DoubleFunction;
+import org.ferromap.continuation.Branch;
+import org.ferromap.continuation.BranchTracer;
+import org.ferromap.continuation.Direction;
+import org.ferromap.continuation.StabilityCriterion;
+import org.ferromap.dynamics.DormandPrince853;
+import org.ferromap.errors.FerromapException;
+import org.ferromap.errors.MessageKey;
+
+/**
+ * Continuation of periodic orbits in one parameter: the shooting residual S(z; p) - z handed to the
+ * generic pseudo-arclength engine ({@link BranchTracer}), the Floquet multipliers at every point,
+ * and the bifurcations between points (fold, period doubling, torus, pitchfork) located by
+ * {@link BifurcationLocator}. At a located period doubling or symmetry-breaking pitchfork,
+ * {@link #switchBranch} starts the new branch (period 2k, or the asymmetric period-1 orbits) and
+ * checks that it did not fall back onto the old orbit.
+ *
+ * <p>Not thread-safe (it owns the integrator work areas): one instance per thread.
+ */
+public final class OrbitContinuation {
+
+    private final OrbitContinuationSettings settings;
+    private final Shooting shooting;
+    private String lastFailure = "";
+
+    public OrbitContinuation(OrbitContinuationSettings settings) {
+        if (settings == null) {
+            throw new FerromapException(MessageKey.BAD_REQUEST, "orbit continuation settings must be given");
+        }
+        this.settings = settings;
+        this.shooting = new Shooting(settings.shooting());
+    }
+
+    public OrbitContinuationSettings settings() {
+        return settings;
+    }
+
+    /** Why the last {@link #switchBranch} came back empty, in words. */
+    public String lastFailure() {
+        return lastFailure;
+    }
+
+    /**
+     * Traces the branch of fixed points of {@code section} through (z0, p0).
+     *
+     * @param family the system at each parameter value
+     * @param z0 state on the section near an orbit at p0, system units (corrected first)
+     * @param p0 start parameter, inside the settings' window
+     * @param section P^k or the half-period map
+     * @param direction which way p goes at the start
+     * @return the branch; a start that does not converge gives an empty branch with the reason
+     */
+    public OrbitBranch trace(DoubleFunction<? extends PeriodicSystem> family, double[] z0, double p0, Section section,
+            Direction direction) {
+        int n = family.apply(p0).dimension();
+        if (z0.length != n) {
+            throw new FerromapException(MessageKey.BAD_REQUEST, "start state has " + z0.length + " components; the system has " + n);
+        }
+        double pTypical = Math.abs(p0) > 0 ? Math.abs(p0) : 1.0;
+        // Correct the start by shooting first: the engine's corrector is a plain Newton without step
+        // limits, the shooting one is damped.
+        double[] start = z0.clone();
+        if (shooting.newton(family.apply(p0), section, start) < 0) {
+            return new OrbitBranch(section, section.orbitPeriod(), new double[0], new double[0][], List.of(), List.of(),
+                    "START_FAILED", "no orbit of " + section + " near the start at p = " + p0 + ": " + shooting.lastFailure());
+        }
+        ShootingProblem problem = new ShootingProblem(family, section, shooting.map(n), pTypical);
+        StabilityCriterion unstable = (x, p, dFdx) -> {
+            double[] m = new double[n * n];
+            for (int i = 0; i < n; i++) {
+                for (int j = 0; j < n; j++) {
+                    m[i * n + j] = dFdx[i][j] + (i == j ? 1.0 : 0.0);
+                }
+            }
+            return FloquetMultipliers.of(m, n).unstableCount();
+        };
+        Branch branch = new BranchTracer(settings.continuation(), unstable).trace(problem, start, p0, direction);
+        return assemble(family, section, branch, n);
+    }
+
+    private OrbitBranch assemble(DoubleFunction<? extends PeriodicSystem> family, Section section, Branch branch, int n) {
+        double pScale = branch.pScale();
+        double size = 0;
+        for (double p : branch.p()) {
+            size = Math.max(size, Math.abs(p));
+        }
+        BifurcationLocator locator = new BifurcationLocator(shooting, family, section, pScale, n,
+                settings.locateTolerance() * Math.max(1.0, size / pScale));
+        List<BifurcationLocator.Sample> samples = new ArrayList<>();
+        List<FloquetMultipliers> mus = new ArrayList<>();
+        double[][] x = branch.x();
+        double[] tp = branch.tangentP();
+        for (int i = 0; i < branch.size(); i++) {
+            BifurcationLocator.Sample s = locator.sample(x[i], branch.p(i), Math.signum(tp[i]));
+            samples.add(s);
+            FloquetMultipliers mu = s == null ? new FloquetMultipliers(nan(n), nan(n)) : s.multipliers();
+            mus.add(section.half() ? mu.squared() : mu);
+        }
+        List<LocatedBifurcation> found = locator.scan(samples);
+        return new OrbitBranch(section, section.orbitPeriod(), branch.p(), x, mus, found, branch.stopReason().name(),
+                branch.stopDetail());
+    }
+
+    /**
+     * Starts the branch born at a period doubling (orbits of twice the period) or a symmetry-breaking
+     * pitchfork on the half-period map (asymmetric orbits of period 1, fixed points of P), and traces
+     * it away from the bifurcation. The seed is the old orbit displaced along the critical
+     * eigenvector (multiplier -1), tried at small parameter offsets on both sides; a converged seed
+     * is accepted only when its least period is the new one and it is not the old orbit (for the
+     * pitchfork: not symmetric).
+     *
+     * @param family the system at each parameter value
+     * @param at a located period doubling or half-map pitchfork
+     * @return the new branch, or empty when no seed converged ({@link #lastFailure()} says why)
+     */
+    public Optional<OrbitBranch> switchBranch(DoubleFunction<? extends PeriodicSystem> family, LocatedBifurcation at) {
+        Section old = at.section();
+        Section target;
+        if (at.type() == BifurcationType.PERIOD_DOUBLING && !old.half()) {
+            target = Section.periods(2 * old.periods());
+        } else if (at.type() == BifurcationType.PITCHFORK && old.half()) {
+            target = Section.periods(1);
+        } else {
+            lastFailure = "branch switching is done at period doublings and at pitchforks of the half-period map, not at a "
+                    + at.type().label() + " of " + old;
+            return Optional.empty();
+        }
+        int n = at.state().length;
+        PeriodMap map = shooting.map(n);
+        double[] jac = new double[n * n];
+        double[] image = new double[n];
+        if (old.apply(map, family.apply(at.parameter()), at.state(), image, jac) != DormandPrince853.Status.OK) {
+            lastFailure = "integration failed at the bifurcation";
+            return Optional.empty();
+        }
+        double[] v = eigenvector(jac, n, -1.0);
+        if (v == null) {
+            lastFailure = "no eigenvector for the multiplier -1";
+            return Optional.empty();
+        }
+        double zSize = 1 + SmallLinear.norm(at.state(), n);
+        double pSize = Math.abs(at.parameter()) > 0 ? Math.abs(at.parameter()) : 1.0;
+        double tol = settings.shooting().newtonTolerance();
+        for (double offset : new double[] {1e-4, 1e-3, 1e-2}) {
+            for (int side : new int[] {1, -1}) {
+                double p1 = at.parameter() + side * offset * pSize;
+                if (p1 < settings.continuation().pMin() || p1 > settings.continuation().pMax()) {
+                    continue;
+                }
+                PeriodicSystem sys = family.apply(p1);
+                double[] base = at.state();
+                if (shooting.newton(sys, old, base) < 0) {
+                    continue;
+                }
+                for (double amplitude : new double[] {1e-2, 3e-2, 1e-1, 3e-1}) {
+                    for (int sign : new int[] {1, -1}) {
+                        double[] seed = new double[n];
+                        for (int i = 0; i < n; i++) {
+                            seed[i] = base[i] + sign * amplitude * zSize * v[i];
+                        }
+                        Optional<Orbit> o = shooting.trySolve(sys, seed, target);
+                        if (o.isEmpty() || o.get().period() != target.orbitPeriod()) {
+                            continue;
+                        }
+                        double[] z = o.get().state();
+                        if (Shooting.distance(z, base, n) <= 1e3 * tol * zSize) {
+                            continue; // fell back onto the old orbit
+                        }
+                        if (old.half()) {
+                            if (old.apply(map, sys, z, image, null) != DormandPrince853.Status.OK
+                                    || Shooting.distance(image, z, n) <= 1e3 * tol * zSize) {
+                                continue; // a symmetric orbit, not one of the asymmetric pair
+                            }
+                        }
+                        return Optional.of(trace(family, z, p1, target, side > 0 ? Direction.INCREASING : Direction.DECREASING));
+                    }
+                }
+            }
+        }
+        lastFailure = "no orbit of " + target + " found next to the " + at.type().label() + " at p = " + at.parameter();
+        return Optional.empty();
+    }
+
+    /** A real unit eigenvector of the row-major matrix m for the real eigenvalue nearest mu, by inverse iteration. */
+    static double[] eigenvector(double[] m, int n, double mu) {
+        FloquetMultipliers ev = FloquetMultipliers.of(m, n);
+        int best = 0;
+        for (int j = 1; j < n; j++) {
+            if (Math.hypot(ev.re()[j] - mu, ev.im()[j]) < Math.hypot(ev.re()[best] - mu, ev.im()[best])) {
+                best = j;
+            }
+        }
+        double shift = ev.re()[best] + 1e-9 * (1 + Math.abs(ev.re()[best]));
+        double[] v = new double[n];
+        for (int i = 0; i < n; i++) {
+            v[i] = 1.0 / Math.sqrt(n) * (1 + 0.1 * i);
+        }
+        for (int it = 0; it < 4; it++) {
+            double[] a = new double[n * n];
+            for (int i = 0; i < n; i++) {
+                for (int j = 0; j < n; j++) {
+                    a[i * n + j] = m[i * n + j] - (i == j ? shift : 0.0);
+                }
+            }
+            if (!SmallLinear.solve(a, v, n)) {
+                return null;
+            }
+            double norm = SmallLinear.norm(v, n);
+            if (!(norm > 0) || !Double.isFinite(norm)) {
+                return null;
+            }
+            for (int i = 0; i < n; i++) {
+                v[i] /= norm;
+            }
+        }
+        return v;
+    }
+
+    private static double[] nan(int n) {
+        double[] a = new double[n];
+        java.util.Arrays.fill(a, Double.NaN);
+        return a;
+    }
+}
