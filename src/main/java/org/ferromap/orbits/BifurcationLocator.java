@@ -59,7 +59,7 @@ final class BifurcationLocator {
     Sample sample(double[] z, double p, double tangentSign) {
         double[] jac = new double[n * n];
         double[] image = new double[n];
-        if (section.apply(map, family.apply(p), z, image, jac) != DormandPrince853.Status.OK) {
+        if (!apply(p, z, image, jac)) {
             return null;
         }
         return new Sample(z.clone(), p, tangentSign, FloquetMultipliers.of(jac, n));
@@ -193,7 +193,7 @@ final class BifurcationLocator {
         for (int it = 0; it < MAX_CORRECTOR; it++) {
             System.arraycopy(w, 0, z, 0, n);
             double q = w[m - 1];
-            if (section.apply(map, family.apply(q * pScale), z, image, jac) != DormandPrince853.Status.OK) {
+            if (!apply(q * pScale, z, image, jac)) {
                 return null;
             }
             double gNorm = 0;
@@ -215,8 +215,8 @@ final class BifurcationLocator {
             rhs[n] = -c;
             // dG/dq by central differences in the parameter.
             double h = 1e-6 * Math.max(1.0, Math.abs(q));
-            if (section.apply(map, family.apply((q + h) * pScale), z, plus, null) != DormandPrince853.Status.OK
-                    || section.apply(map, family.apply((q - h) * pScale), z, minus, null) != DormandPrince853.Status.OK) {
+            if (!apply((q + h) * pScale, z, plus, null)
+                    || !apply((q - h) * pScale, z, minus, null)) {
                 return null;
             }
             for (int i = 0; i < n; i++) {
@@ -236,6 +236,18 @@ final class BifurcationLocator {
             }
         }
         return null;
+    }
+
+    /** One map evaluation; false when it fails or the parameter is outside the system's allowed range. */
+    private boolean apply(double p, double[] z, double[] out, double[] jacobian) {
+        try {
+            return section.apply(map, family.apply(p), z, out, jacobian) == DormandPrince853.Status.OK;
+        } catch (org.ferromap.errors.FerromapException e) {
+            if (e.key() == org.ferromap.errors.MessageKey.OUT_OF_RANGE) {
+                return false;
+            }
+            throw e;
+        }
     }
 
     private double[] scaled(Sample s) {

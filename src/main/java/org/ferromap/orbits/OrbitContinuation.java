@@ -95,15 +95,54 @@ public final class OrbitContinuation {
         List<FloquetMultipliers> mus = new ArrayList<>();
         double[][] x = branch.x();
         double[] tp = branch.tangentP();
-        for (int i = 0; i < branch.size(); i++) {
-            BifurcationLocator.Sample s = locator.sample(x[i], branch.p(i), Math.signum(tp[i]));
+        double[] ps = branch.p();
+        int count = branch.size();
+        String stop = branch.stopReason().name();
+        String detail = branch.stopDetail();
+        // A branch of period k > 1 ends where it meets an orbit of a divisor period (at the doubling
+        // it was born from, or another one): past it the engine would follow the old orbit, which is
+        // also a fixed point of P^k.
+        int lower = lowerPeriodIndex(family, section, x, ps, n);
+        if (lower > 0) {
+            count = lower + 1;
+            stop = "LOWER_PERIOD";
+            detail = "the branch meets an orbit of lower period at p = " + ps[lower];
+            x = java.util.Arrays.copyOf(x, count);
+            ps = java.util.Arrays.copyOf(ps, count);
+        }
+        for (int i = 0; i < count; i++) {
+            BifurcationLocator.Sample s = locator.sample(x[i], ps[i], Math.signum(tp[i]));
             samples.add(s);
             FloquetMultipliers mu = s == null ? new FloquetMultipliers(nan(n), nan(n)) : s.multipliers();
             mus.add(section.half() ? mu.squared() : mu);
         }
         List<LocatedBifurcation> found = locator.scan(samples);
-        return new OrbitBranch(section, section.orbitPeriod(), branch.p(), x, mus, found, branch.stopReason().name(),
-                branch.stopDetail());
+        return new OrbitBranch(section, section.orbitPeriod(), ps, x, mus, found, stop, detail);
+    }
+
+    /** Index of the first point after the start whose least period is below k, or -1. */
+    private int lowerPeriodIndex(DoubleFunction<? extends PeriodicSystem> family, Section section, double[][] x, double[] p,
+            int n) {
+        int k = section.periods();
+        if (section.half() || k == 1) {
+            return -1;
+        }
+        PeriodMap map = shooting.map(n);
+        double[] z = new double[n];
+        for (int i = 1; i < x.length; i++) {
+            System.arraycopy(x[i], 0, z, 0, n);
+            PeriodicSystem sys = family.apply(p[i]);
+            double tol = 100 * settings.shooting().newtonTolerance() * (1 + SmallLinear.norm(x[i], n));
+            for (int j = 1; j < k; j++) {
+                if (map.apply(sys, z, 1, z, null) != DormandPrince853.Status.OK) {
+                    break;
+                }
+                if (k % j == 0 && Shooting.distance(z, x[i], n) <= tol) {
+                    return i;
+                }
+            }
+        }
+        return -1;
     }
 
     /**

@@ -43,7 +43,7 @@ final class ShootingProblem implements ContinuationProblem {
 
     @Override
     public void residual(double[] x, double p, double[] out) {
-        if (section.apply(map, family.apply(p), x, image, null) != DormandPrince853.Status.OK) {
+        if (!apply(p, x, image, null)) {
             Arrays.fill(out, Double.NaN);
             return;
         }
@@ -54,7 +54,7 @@ final class ShootingProblem implements ContinuationProblem {
 
     @Override
     public void jacobian(double[] x, double p, double[][] dFdx, double[] dFdp) {
-        if (section.apply(map, family.apply(p), x, image, jac) != DormandPrince853.Status.OK) {
+        if (!apply(p, x, image, jac)) {
             fillNaN(dFdx, dFdp);
             return;
         }
@@ -64,13 +64,28 @@ final class ShootingProblem implements ContinuationProblem {
             }
         }
         double h = 1e-6 * Math.max(Math.abs(p), pTypical);
-        if (section.apply(map, family.apply(p + h), x, plus, null) != DormandPrince853.Status.OK
-                || section.apply(map, family.apply(p - h), x, minus, null) != DormandPrince853.Status.OK) {
+        if (!apply(p + h, x, plus, null)
+                || !apply(p - h, x, minus, null)) {
             fillNaN(dFdx, dFdp);
             return;
         }
         for (int i = 0; i < n; i++) {
             dFdp[i] = (plus[i] - minus[i]) / (2 * h);
+        }
+    }
+
+    /**
+     * One map evaluation; false when the integration fails or the parameter is not allowed for the
+     * system (the corrector may try values outside the physical range, e.g. a negative capacitance).
+     */
+    private boolean apply(double p, double[] x, double[] out, double[] jacobian) {
+        try {
+            return section.apply(map, family.apply(p), x, out, jacobian) == DormandPrince853.Status.OK;
+        } catch (org.ferromap.errors.FerromapException e) {
+            if (e.key() == org.ferromap.errors.MessageKey.OUT_OF_RANGE) {
+                return false;
+            }
+            throw e;
         }
     }
 
