@@ -4,6 +4,11 @@ import java.util.ArrayList;
 import java.util.List;
 import java.util.Optional;
 import java.util.function.DoubleFunction;
+import org.ferromap.balance.CircuitParameter;
+import org.ferromap.balance.Fold;
+import org.ferromap.balance.HarmonicSettings;
+import org.ferromap.balance.MultiHarmonicBalance;
+import org.ferromap.balance.SingleHarmonicBalance;
 import org.ferromap.circuit.EquivalentCircuit;
 import org.ferromap.continuation.Direction;
 import org.ferromap.dynamics.DormandPrince853;
@@ -93,7 +98,7 @@ public final class CircuitOrbits {
     public static OrbitBranch continueOrbit(EquivalentCircuit base, CircuitParameter parameter, double flux, double voltage,
             Section section, Direction direction, OrbitContinuationSettings settings) {
         DoubleFunction<CircuitSystem> family = family(base, parameter);
-        double p0 = parameter.valueIn(base);
+        double p0 = parameter.valueOf(base);
         return new OrbitContinuation(settings).trace(family, family.apply(p0).scaledState(flux, voltage), p0, section, direction);
     }
 
@@ -116,7 +121,7 @@ public final class CircuitOrbits {
             throw new FerromapException(MessageKey.OUT_OF_RANGE, "largest period = " + maxPeriod + " is not allowed; expected 1 to 8");
         }
         DoubleFunction<CircuitSystem> family = family(base, parameter);
-        double p0 = parameter.valueIn(base);
+        double p0 = parameter.valueOf(base);
         CircuitSystem sys = family.apply(p0);
         OrbitContinuation oc = new OrbitContinuation(settings);
         Shooting shooting = new Shooting(settings.shooting().withCheckAccuracy(false));
@@ -173,6 +178,36 @@ public final class CircuitOrbits {
             }
         }
         return false;
+    }
+
+    /**
+     * The folds in source peak located three ways for one circuit: single-harmonic balance,
+     * multi-harmonic balance (balance package) and the exact periodic orbits, one comparison per
+     * single-harmonic fold, each matched with the nearest fold of the other two methods.
+     *
+     * @param circuit the circuit
+     * @param exactBranches orbit branches continued in {@link CircuitParameter#SOURCE} (for
+     *        instance from {@link #explore}); their folds are the exact ones
+     * @param harmonics harmonic-balance settings; null skips the multi-harmonic column (NaN)
+     * @return one comparison per single-harmonic fold, in the balance's order (jump-up first)
+     */
+    public static List<FoldComparison> compareFolds(EquivalentCircuit circuit, List<OrbitBranch> exactBranches,
+            HarmonicSettings harmonics) {
+        SingleHarmonicBalance single = new SingleHarmonicBalance();
+        List<Fold> sh = single.folds(circuit);
+        List<Fold> mh = harmonics == null ? List.of() : new MultiHarmonicBalance(circuit, harmonics).folds(single);
+        List<FoldComparison> out = new ArrayList<>();
+        for (Fold f : sh) {
+            double e = f.sourcePeak();
+            double multi = Double.NaN;
+            for (Fold m : mh) {
+                if (Double.isNaN(multi) || Math.abs(m.sourcePeak() - e) < Math.abs(multi - e)) {
+                    multi = m.sourcePeak();
+                }
+            }
+            out.add(FoldComparison.of(CircuitParameter.SOURCE, e, multi, FoldComparison.nearestExactFold(exactBranches, e)));
+        }
+        return out;
     }
 
     /** Branches as the contract's {@code orbits} object, in SI. */

@@ -1,5 +1,6 @@
 package org.ferromap.orbits;
 
+import org.ferromap.balance.CircuitParameter;
 /**
  * One fold located three ways, side by side: the single-harmonic balance, the multi-harmonic
  * balance and the exact periodic orbit (shooting and continuation). The relative differences are

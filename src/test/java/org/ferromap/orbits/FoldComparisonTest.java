@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import org.ferromap.balance.CircuitParameter;
 import org.ferromap.circuit.EquivalentCircuit;
 import org.ferromap.continuation.Direction;
 import org.ferromap.equipment.PolynomialCurve;
@@ -33,18 +34,32 @@ class FoldComparisonTest {
             single[i] = lambda * Math.hypot(xs[i] - kappa, g);
         }
         double[] seed = CircuitOrbits.settledState(base, 0, 0, 400, 1e-10);
-        OrbitBranch b = CircuitOrbits.continueOrbit(base, CircuitParameter.SOURCE_PEAK, seed[0], seed[1], Section.halfPeriod(),
+        OrbitBranch b = CircuitOrbits.continueOrbit(base, CircuitParameter.SOURCE, seed[0], seed[1], Section.halfPeriod(),
                 Direction.INCREASING, OrbitContinuationSettings.DEFAULTS.withWindow(0.001, 0.3));
         List<LocatedBifurcation> folds = b.bifurcations(BifurcationType.FOLD);
         assertTrue(folds.size() >= 2, "jump-up and jump-down folds on the symmetric branch: " + folds.size());
         for (double estimate : single) {
             double exact = FoldComparison.nearestExactFold(List.of(b), estimate);
-            FoldComparison c = FoldComparison.of(CircuitParameter.SOURCE_PEAK, estimate, Double.NaN, exact);
+            FoldComparison c = FoldComparison.of(CircuitParameter.SOURCE, estimate, Double.NaN, exact);
             // DOMAIN.md §3 [der]: single-harmonic folds differ from the time-domain ones by a few
             // percent for a smooth cubic; 10 % bounds "a few" and still fails on a wrong fold.
             assertTrue(Math.abs(c.singleHarmonicDifference()) < 0.10, c.toString());
             assertEquals((estimate - exact) / exact, c.singleHarmonicDifference(), 1e-15);
             assertTrue(Double.isNaN(c.multiHarmonicDifference()));
+        }
+        // The balance package's side by side: its single-harmonic folds must be the closed form
+        // above (DOMAIN.md §3 [der], 1e-6 relative: its numerical tangency tolerance is far below),
+        // and the multi-harmonic folds converge to the periodic solution, so they must match the
+        // exact folds (an independent method: Galerkin in frequency against shooting in time) to
+        // 1e-6 relative: both locate to ~1e-10, and the harmonics of a weakly saturated cubic decay
+        // geometrically, so nine odd harmonics truncate far below 1e-6.
+        List<FoldComparison> all = CircuitOrbits.compareFolds(base, List.of(b), org.ferromap.balance.HarmonicSettings.DEFAULTS);
+        assertEquals(2, all.size());
+        for (FoldComparison c : all) {
+            double closed = Math.abs(c.singleHarmonic() - single[0]) < Math.abs(c.singleHarmonic() - single[1]) ? single[0] : single[1];
+            assertEquals(closed, c.singleHarmonic(), 1e-6 * closed);
+            assertTrue(Math.abs(c.multiHarmonicDifference()) < 1e-6, c.toString());
+            assertTrue(Math.abs(c.multiHarmonicDifference()) < Math.abs(c.singleHarmonicDifference()), c.toString());
         }
     }
 }

@@ -4,6 +4,7 @@ import static org.junit.jupiter.api.Assertions.assertEquals;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import java.util.List;
+import org.ferromap.balance.CircuitParameter;
 import org.ferromap.circuit.EquivalentCircuit;
 import org.ferromap.continuation.Direction;
 import org.ferromap.equipment.PolynomialCurve;
@@ -40,13 +41,13 @@ class SiScaleCircuitTest {
         double[] seed = CircuitOrbits.settledState(base, 0, 0, 300, 1e-10);
         OrbitContinuationSettings settings = OrbitContinuationSettings.DEFAULTS.withWindow(0.2 * RATED_PEAK, 3.0 * RATED_PEAK);
         continuation = new OrbitContinuation(settings);
-        symmetric = CircuitOrbits.continueOrbit(base, CircuitParameter.SOURCE_PEAK, seed[0], seed[1], Section.halfPeriod(),
+        symmetric = CircuitOrbits.continueOrbit(base, CircuitParameter.SOURCE, seed[0], seed[1], Section.halfPeriod(),
                 Direction.INCREASING, settings);
         LocatedBifurcation pitchfork = symmetric.bifurcations(BifurcationType.PITCHFORK).get(0);
-        asymmetric = continuation.switchBranch(CircuitOrbits.family(base, CircuitParameter.SOURCE_PEAK), pitchfork)
+        asymmetric = continuation.switchBranch(CircuitOrbits.family(base, CircuitParameter.SOURCE), pitchfork)
                 .orElseThrow(() -> new AssertionError(continuation.lastFailure()));
         LocatedBifurcation pd = asymmetric.bifurcations(BifurcationType.PERIOD_DOUBLING).get(0);
-        doubled = continuation.switchBranch(CircuitOrbits.family(base, CircuitParameter.SOURCE_PEAK), pd)
+        doubled = continuation.switchBranch(CircuitOrbits.family(base, CircuitParameter.SOURCE), pd)
                 .orElseThrow(() -> new AssertionError(continuation.lastFailure()));
     }
 
@@ -100,7 +101,7 @@ class SiScaleCircuitTest {
         double e0 = CS * 0.6 * RATED_PEAK / (c * RATED_PEAK);
         EquivalentCircuit twin = EquivalentCircuit.of(1.0, e0, 1.0, 0.0, twinCurve).withCoreLossResistance(1 / g).withRatedPeak(1.0);
         double[] seed = CircuitOrbits.settledState(twin, 0, 0, 300, 1e-10);
-        OrbitBranch b = CircuitOrbits.continueOrbit(twin, CircuitParameter.SOURCE_PEAK, seed[0], seed[1], Section.halfPeriod(),
+        OrbitBranch b = CircuitOrbits.continueOrbit(twin, CircuitParameter.SOURCE, seed[0], seed[1], Section.halfPeriod(),
                 Direction.INCREASING, OrbitContinuationSettings.DEFAULTS.withWindow(0.1, 3.0));
         double ePitchfork = b.bifurcations(BifurcationType.PITCHFORK).get(0).parameter();
         double eFromSi = CS * symmetric.bifurcations(BifurcationType.PITCHFORK).get(0).parameter() / (c * RATED_PEAK);
@@ -125,7 +126,7 @@ class SiScaleCircuitTest {
 
     @Test
     void reportIsInSiUnits() {
-        OrbitsReport r = CircuitOrbits.report(circuit(RATED_PEAK), CircuitParameter.SOURCE_PEAK, List.of(symmetric, asymmetric));
+        OrbitsReport r = CircuitOrbits.report(circuit(RATED_PEAK), CircuitParameter.SOURCE, List.of(symmetric, asymmetric));
         assertEquals(symmetric.size() + asymmetric.size(), r.points().size());
         OrbitPoint p = r.points().get(0);
         CircuitSystem sys = CircuitSystem.of(circuit(RATED_PEAK));
