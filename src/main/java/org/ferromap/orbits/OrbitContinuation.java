@@ -83,7 +83,14 @@ public final class OrbitContinuation {
         return assemble(family, section, branch, n);
     }
 
+    private DoubleFunction<? extends PeriodicSystem> currentFamily;
+
+    private PeriodicSystem familyOf(double p) {
+        return currentFamily.apply(p);
+    }
+
     private OrbitBranch assemble(DoubleFunction<? extends PeriodicSystem> family, Section section, Branch branch, int n) {
+        currentFamily = family;
         double pScale = branch.pScale();
         double size = 0;
         for (double p : branch.p()) {
@@ -116,8 +123,58 @@ public final class OrbitContinuation {
             FloquetMultipliers mu = s == null ? new FloquetMultipliers(nan(n), nan(n)) : s.multipliers();
             mus.add(section.half() ? mu.squared() : mu);
         }
-        List<LocatedBifurcation> found = locator.scan(samples);
+        List<LocatedBifurcation> found = new ArrayList<>(locator.scan(samples));
+        addEvenCrossings(branch, section, count, n, found);
         return new OrbitBranch(section, section.orbitPeriod(), ps, x, mus, found, stop, detail);
+    }
+
+    /**
+     * Adds the engine's folds and branch points that the multiplier test functions cannot see
+     * because a multiplier touches +1 without crossing: the tip of a pitchfork seen from the
+     * asymmetric orbits (both halves of the parabola have the same multipliers) and simple branch
+     * points. A genuine fold has an odd crossing and is already found; these are pitchforks.
+     */
+    private void addEvenCrossings(Branch branch, Section section, int count, int n, List<LocatedBifurcation> found) {
+        for (org.ferromap.continuation.SpecialPoint sp : branch.specialPoints()) {
+            if (sp.afterIndex() >= count - 1) {
+                continue;
+            }
+            double p = sp.p();
+            boolean known = false;
+            for (LocatedBifurcation b : found) {
+                if (Math.abs(b.parameter() - p) <= 1e-6 * Math.max(Math.abs(p), branch.pScale())
+                        && Math.abs(b.afterIndex() - sp.afterIndex()) <= 1) {
+                    known = true;
+                }
+            }
+            if (known) {
+                continue;
+            }
+            double[] jac = new double[n * n];
+            double[] image = new double[n];
+            FloquetMultipliers mu;
+            try {
+                PeriodicSystem sys = familyOf(p);
+                if (sys == null || section.apply(shooting.map(n), sys, sp.x(), image, jac) != DormandPrince853.Status.OK) {
+                    continue;
+                }
+                mu = FloquetMultipliers.of(jac, n);
+            } catch (FerromapException e) {
+                continue;
+            }
+            int best = 0;
+            for (int j = 1; j < n; j++) {
+                if (Math.hypot(mu.re()[j] - 1, mu.im()[j]) < Math.hypot(mu.re()[best] - 1, mu.im()[best])) {
+                    best = j;
+                }
+            }
+            if (Math.hypot(mu.re()[best] - 1, mu.im()[best]) > 1e-4) {
+                continue; // not a multiplier +1: a turning point of another kind is not ours to report
+            }
+            found.add(new LocatedBifurcation(BifurcationType.PITCHFORK, p, section.orbitPeriod(), section, sp.x(), mu,
+                    new double[] {mu.re()[best], mu.im()[best]}, sp.afterIndex(), sp.located()));
+        }
+        found.sort((a, b) -> Integer.compare(a.afterIndex(), b.afterIndex()));
     }
 
     /** Index of the first point after the start whose least period is below k, or -1. */
