@@ -72,11 +72,18 @@ public record ArresterModel(double ratedVoltage, double referenceVoltage, double
         return new ArresterModel(ratedVoltage, referenceVoltage, referenceCurrent, alpha, kilojoulesPerKilovolt);
     }
 
-    /** The arrester's current at voltage v, A (odd in v). */
+    /**
+     * The arrester's current at voltage v, A (odd in v). The voltage ratio is capped at
+     * {@link #RATIO_CAP} so that an integrator's trial step far outside the physical range gives a
+     * large finite current (and a rejected step) rather than infinity.
+     */
     public double current(double v) {
-        double r = Math.abs(v) / referenceVoltage;
+        double r = Math.min(Math.abs(v) / referenceVoltage, RATIO_CAP);
         return Math.copySign(referenceCurrent * Math.pow(r, alpha), v);
     }
+
+    /** Largest voltage ratio v / V_ref evaluated: 4 x V_ref drives 1e18 A at alpha = 30, far beyond any arrester. */
+    public static final double RATIO_CAP = 4.0;
 
     /** Rated energy capability, J (NaN when no rating was given). */
     public double capability() {

@@ -22,6 +22,12 @@ import java.util.Map;
  * @param loadPercent          the same in percent of the transformer's rating (NaN for circuit studies)
  * @param phaseResistance      the same as a wye-equivalent resistor per phase at the primary, ohm (NaN for circuit studies)
  * @param loopResistance       1 / added conductance, the resistance across the loop's terminal, ohm
+ * @param voltageConductance   the smallest total conductance with no stable ferroresonant state at this
+ *                             source voltage alone, S (at most G_min; NaN when G_min leaves a
+ *                             ferroresonant single branch): for information, a voltage rise or another
+ *                             switching sequence can still reach the ferroresonant branch below G_min
+ * @param voltageAdded         that less the existing conductance, S
+ * @param voltageLoadPower     that as a three-phase load at rated voltage, W (NaN for circuit studies)
  * @param steps                the simulation steps: as built (if asked), at G_min, then increased stepwise
  * @param recommended          the first step with every event in the normal state; null if none within the steps
  * @param arrester             the arrester's duty during the worst as-built event; null when no arrester was given
@@ -42,6 +48,9 @@ public record DampingResult(
         double loadPercent,
         double phaseResistance,
         double loopResistance,
+        double voltageConductance,
+        double voltageAdded,
+        double voltageLoadPower,
         List<Step> steps,
         Step recommended,
         Arrester arrester,
@@ -84,9 +93,10 @@ public record DampingResult(
      * @param eventAngle         switching angle of the event simulated, rad
      * @param eventResidualFlux  its residual flux, pu
      * @param peakWithoutArrester the event's peak without the arrester, pu of the loop's rated peak
-     * @param duty               what the arrester absorbed
+     * @param duty               what the arrester absorbed; null when its simulation failed
+     * @param failure            why the simulation failed; null when it did not
      */
     public record Arrester(double ratedVoltage, double referenceVoltage, double referenceCurrent, double alpha,
                            double energyRating, List<String> sources, double eventAngle, double eventResidualFlux,
-                           double peakWithoutArrester, ArresterDuty.Result duty) { }
+                           double peakWithoutArrester, ArresterDuty.Result duty, String failure) { }
 }

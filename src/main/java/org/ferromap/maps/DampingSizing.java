@@ -5,10 +5,13 @@ import java.util.List;
 import org.ferromap.balance.CuspCondition;
 import org.ferromap.balance.Fold;
 import org.ferromap.balance.FoldDirection;
+import org.ferromap.balance.OperatingPoint;
+import org.ferromap.balance.PointKind;
 import org.ferromap.balance.SingleHarmonicBalance;
 import org.ferromap.circuit.EquivalentCircuit;
 import org.ferromap.equipment.Installation;
 import org.ferromap.equipment.PolynomialCurve;
+import org.ferromap.errors.FerromapException;
 import org.ferromap.study.Study;
 import org.ferromap.study.StudyParameters;
 import org.ferromap.study.SweepParameter;
@@ -55,6 +58,9 @@ public final class DampingSizing {
         double percent = in == null ? Double.NaN : 100 * power / in.transformer().rating();
         double phaseR = in == null || added == 0 ? Double.NaN : 1.0 / (k * added);
         double loopR = added == 0 ? Double.POSITIVE_INFINITY : 1.0 / added;
+        double gVoltage = voltageConductance(balance, c, gMin);
+        double addedAtVoltage = Math.max(0, gVoltage - g0);
+        double powerAtVoltage = in == null ? Double.NaN : k * vRated * vRated * addedAtVoltage;
 
         List<DampingResult.Step> steps = new ArrayList<>();
         SwitchingEnsemble.Outcome asBuilt = null;
@@ -90,9 +96,18 @@ public final class DampingSizing {
             SwitchingEnsemble.Event worst = o.worst();
             double offset = in == null ? 0.0 : ArresterDuty.terminalOffset(in.transformer().connection(), in.openPhases());
             EquivalentCircuit atEvent = c.withSourceAngle(worst.angle());
-            ArresterDuty.Result duty = ArresterDuty.simulate(atEvent, offset, worst.residualFlux() * c.ratedPeak() / c.omega(),
-                    settings.arrester(), settings.eventDuration(), ArresterDuty.DEFAULT_TRANSIENT_PERIODS,
-                    ArresterDuty.DEFAULT_MEASURED_PERIODS);
+            ArresterDuty.Result duty = null;
+            String failure = null;
+            try {
+                duty = ArresterDuty.simulate(atEvent, offset, worst.residualFlux() * c.ratedPeak() / c.omega(),
+                        settings.arrester(), settings.eventDuration(), ArresterDuty.DEFAULT_TRANSIENT_PERIODS,
+                        ArresterDuty.DEFAULT_MEASURED_PERIODS);
+            } catch (FerromapException e) {
+                if (e.key().isInputError()) {
+                    throw e;
+                }
+                failure = e.getMessage();
+            }
             ArresterModel a = settings.arrester();
             List<String> sources = new ArrayList<>();
             sources.add(ArresterModel.ALPHA_SOURCE + (a.alpha() == ArresterModel.DEFAULT_ALPHA ? "" : " (default; the study sets " + a.alpha() + ")"));
@@ -107,7 +122,7 @@ public final class DampingSizing {
             sources.add("arrester voltage: the open terminal to ground, V_a = W - c e(t) with c = " + offset
                     + " [der from the reduction's table]");
             arrester = new DampingResult.Arrester(a.ratedVoltage(), a.referenceVoltage(), a.referenceCurrent(), a.alpha(),
-                    a.energyRating(), sources, worst.angle(), worst.residualFlux(), worst.peakPerUnit(), duty);
+                    a.energyRating(), sources, worst.angle(), worst.residualFlux(), worst.peakPerUnit(), duty, failure);
         }
 
         List<String> notes = new ArrayList<>();
@@ -126,7 +141,8 @@ public final class DampingSizing {
         }
         return new DampingResult(study.title(), in == null ? Double.NaN : in.cableLength(),
                 in == null ? c.sourcePeak() : in.sourceLineVoltage(), c.sourcePeak(), g0, gMin, method, bistable, added, power,
-                percent, phaseR, loopR, steps, recommended, arrester, settings.ensemble().describe(), notes);
+                percent, phaseR, loopR, gVoltage, addedAtVoltage, powerAtVoltage, steps, recommended, arrester,
+                settings.ensemble().describe(), notes);
     }
 
     /** The loop at the settings' length and voltage. */
@@ -141,7 +157,7 @@ public final class DampingSizing {
     public static EquivalentCircuit circuit(Study study, double length, double voltage) {
         if (!study.isEquipmentForm()) {
             if (!Double.isNaN(length)) {
-                throw new org.ferromap.errors.FerromapException(org.ferromap.errors.MessageKey.BAD_REQUEST,
+                throw new FerromapException(org.ferromap.errors.MessageKey.BAD_REQUEST,
                         "a cable length needs an equipment-form study; this study gives the circuit only");
             }
             return Double.isNaN(voltage) ? study.circuit() : study.circuit().withSourcePeak(voltage);
@@ -225,6 +241,42 @@ public final class DampingSizing {
     static final double CHECK = 1e-3;
     /** Relative accuracy of a bisected conductance. */
     static final double BISECTION = 1e-7;
+
+    /**
+     * The smallest total conductance at which no stable ferroresonant state exists at the
+     * circuit's own source voltage, S: bisection (relative 1e-7) between the circuit's own
+     * conductance and G_min on whether the balance has a stable ferroresonant point. At most G_min;
+     * the circuit's own when it has no such state as built.
+     */
+    public static double voltageConductance(SingleHarmonicBalance balance, EquivalentCircuit c, double gMin) {
+        double a = c.conductance();
+        if (!ferroresonantPoint(balance, atConductance(c, a)) || !(gMin > a)) {
+            return a;
+        }
+        double b = gMin;
+        if (ferroresonantPoint(balance, atConductance(c, b))) {
+            // the single branch can be ferroresonant past the cusp (a capacitive loop): G_min is not enough alone
+            return Double.NaN;
+        }
+        while (b - a > BISECTION * b) {
+            double m = 0.5 * (a + b);
+            if (ferroresonantPoint(balance, atConductance(c, m))) {
+                a = m;
+            } else {
+                b = m;
+            }
+        }
+        return b;
+    }
+
+    private static boolean ferroresonantPoint(SingleHarmonicBalance balance, EquivalentCircuit c) {
+        for (OperatingPoint p : balance.operatingPoints(c)) {
+            if (p.stable() && p.kind() == PointKind.FERRORESONANT) {
+                return true;
+            }
+        }
+        return false;
+    }
 
     /** The circuit with total conductance exactly g (as core loss; only the total enters the balance). */
     private static EquivalentCircuit atConductance(EquivalentCircuit c, double g) {

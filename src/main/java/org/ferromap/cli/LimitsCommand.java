@@ -1,0 +1,88 @@
+package org.ferromap.cli;
+
+import java.nio.file.Path;
+import org.ferromap.maps.LimitRow;
+import org.ferromap.maps.LimitSettings;
+import org.ferromap.maps.LimitTableResult;
+import org.ferromap.maps.LocalPoolExecutor;
+import org.ferromap.report.Json;
+import org.ferromap.report.OutputFolder;
+import org.ferromap.study.Study;
+import picocli.CommandLine.Command;
+import picocli.CommandLine.Mixin;
+import picocli.CommandLine.Option;
+
+/** Cable-length limit tables over ratings, connections, cables, voltage classes and open-phase cases. */
+@Command(name = "limits", description = {
+    "Cable-length limit table per rating, connection, cable, voltage class and open-phase case.",
+    "Table: for every rating x connection x cable x voltage class x open-phase case",
+    "of the study's analyses.limits block (default: ratings around the study's, its connection, cable",
+    "and voltage, one and two open phases), the longest cable with no ferroresonant state at rated",
+    "voltage and at the margins (1.0, 1.05, 1.1 pu), from the folds; the linear criterion beside it.",
+    "Writes a chart (PNG, SVG, PDF), CSV and JSON under <out>/<study>/limits."})
+final class LimitsCommand extends BaseCommand {
+
+    @Mixin
+    StudyOptions study;
+
+    @Mixin
+    ThreadOptions threads;
+
+    @Option(names = "--confirm", description = "Check each rated-voltage limit by simulating switching events at 0.95 of it "
+            + "(4 angles; the study's analyses.limits.confirm block, when given, sets these).")
+    boolean confirm;
+
+    @Override
+    int work() {
+        Study s = study.read();
+        LimitSettings settings = LimitSettings.from(s);
+        if (confirm && settings.confirm() == null) {
+            settings = settings.withConfirm(LimitSettings.Confirmation.defaults());
+        }
+        LocalPoolExecutor ex = threads.executor();
+        LimitTableResult r;
+        Path dir;
+        try (OutputFolder f = OutputFolder.open(study.folderFor("limits"))) {
+            r = DeliverableSections.limits(s, settings, ex, f.staging(), null);
+            dir = f.commit();
+        }
+        if (study.json) {
+            out().println(Json.text(r));
+            return Main.OK;
+        }
+        var o = out();
+        o.println(s.title());
+        o.println("  limit: " + r.limitDefinition());
+        o.printf("  %-9s %-9s %-15s %-14s %-4s", "rating", "voltage", "connection", "cable", "open");
+        for (LimitRow.MarginLimit m : r.rows().get(0).limits()) {
+            o.printf(" %-12s", String.format("at %.3g pu", m.margin()));
+        }
+        o.printf(" %-14s %-14s %s%n", "linear K", "lin. resonance", "check");
+        for (LimitRow row : r.rows()) {
+            o.printf("  %-9s %-9s %-15s %-14s %-4d", String.format("%.4g kVA", row.rating() / 1e3),
+                    String.format("%.4g kV", row.voltage() / 1e3), row.connection(), row.cable(), row.openPhases());
+            for (LimitRow.MarginLimit m : row.limits()) {
+                o.printf(" %-12s", metres(m.length()));
+            }
+            LimitRow.Check c = row.check();
+            o.printf(" %-14s %-14s %s%n", metres(row.linearLength()) + " (" + String.format("%.3g", row.linearK()) + ")",
+                    metres(row.linearResonanceLength()), c == null ? "-" : c.confirmed() ? "confirmed"
+                            : c.ferroresonant() + "/" + c.events() + " ferroresonant");
+        }
+        for (String src : r.sources()) {
+            o.println("  source: " + src);
+        }
+        for (String n : r.notes()) {
+            o.println("  note: " + n);
+        }
+        o.println("  written: " + dir);
+        return Main.OK;
+    }
+
+    static String metres(double m) {
+        if (Double.isInfinite(m)) {
+            return "no limit";
+        }
+        return Double.isNaN(m) ? "-" : m >= 10_000 ? String.format("%.3g km", m / 1e3) : String.format("%.3g m", m);
+    }
+}
