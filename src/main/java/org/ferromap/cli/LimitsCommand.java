@@ -67,7 +67,7 @@ final class LimitsCommand extends BaseCommand {
             LimitRow.Check c = row.check();
             o.printf(" %-14s %-14s %s%n", metres(row.linearLength()) + " (" + String.format("%.3g", row.linearK()) + ")",
                     metres(row.linearResonanceLength()), c == null ? "-" : c.confirmed() ? "confirmed"
-                            : c.ferroresonant() + "/" + c.events() + " ferroresonant");
+                            : c.offBranch() + "/" + c.events() + " off the predicted state");
         }
         for (String src : r.sources()) {
             o.println("  source: " + src);

@@ -9,6 +9,7 @@ import org.ferromap.balance.Fold;
 import org.ferromap.balance.FoldDirection;
 import org.ferromap.balance.SingleHarmonicBalance;
 import org.ferromap.circuit.EquivalentCircuit;
+import org.ferromap.equipment.PolynomialCurve;
 import org.ferromap.errors.FerromapException;
 import org.ferromap.errors.MessageKey;
 import org.hipparchus.analysis.solvers.BrentSolver;
@@ -25,15 +26,21 @@ import org.hipparchus.exception.MathRuntimeException;
  * <ul>
  *   <li>The total loop capacitance grows in proportion to the cable length, and whether a fold
  *   pair exists depends only on the total capacitance, the curve and the conductance (the cusp
- *   condition, DOMAIN.md §3 [der]). So the cusp length is C_min / C'_eq from one cusp condition.</li>
+ *   condition, DOMAIN.md §3 [der]). So the cusp length is C_min / C'_eq from one cusp condition
+ *   (exactly so for polynomial curves; a first guess for the others, see below).</li>
  *   <li>At the cusp the fold pair is born at the source voltage E_birth. A source at or above it
  *   has a ferroresonant state from the cusp length on. A lower source meets the jump-down fold
  *   further out: the fold falls with length, so the first crossing is bracketed on a geometric
  *   ladder of lengths (ratio 2^(1/4)) and refined with Brent's method (relative 1e-10).</li>
  * </ul>
- * The folds define the limit, so the cusp length is checked against the fold scan 0.1 % either
- * side; where they disagree (numerical cusp conditions of kinked, piecewise-linear curves can) the
- * cusp is found by bisection on whether the fold scan has a pair (relative 1e-7) instead.
+ * For curves without closed forms the folds themselves decide: the cusp condition only gives a
+ * first guess, and the start of the lasting bistable region is found on the fold scan (a fine
+ * geometric ladder down from twice the guess, then bisection to relative 1e-7). This steps over
+ * narrow windows of bistability that close again (interpolated table curves make them between
+ * coarse points, where the two states differ little; numerical cusp conditions find them or not
+ * depending on their grid) and over disagreements between the cusp condition and the fold scan
+ * (piecewise-linear curves), so the limit is smooth in the parameters. A window found is named in
+ * the note.
  * Immutable and thread-safe.
  */
 public final class FoldLimit {
@@ -66,7 +73,7 @@ public final class FoldLimit {
     /**
      * Fold-based limits of one installation.
      *
-     * @param cuspLength        the shortest length with a fold pair (bistability at some voltage), m;
+     * @param cuspLength        where the lasting bistable region begins (a fold pair at some voltage), m;
      *                          infinite when none up to the longest length searched
      * @param cuspSourcePeak    source peak at which the fold pair is born at the cusp length, V (NaN if none)
      * @param sourcePeaks       the source peaks asked about, V
@@ -123,25 +130,39 @@ public final class FoldLimit {
             return new Result(Double.POSITIVE_INFINITY, Double.NaN, sourcePeaks, limits,
                     String.format("no fold pair up to %.4g m (the cusp lies at about %.4g m)", maxLength, first));
         }
-        // Once more at the cusp itself: numerical cusp conditions depend slightly on where they are
-        // evaluated, and the birth voltage is that of the circuit with C = C_min.
-        CuspCondition atCusp = balance.cuspCondition(circuitAtLength.apply(first));
-        double cusp = Double.isNaN(atCusp.minimumCapacitance()) ? first : atCusp.minimumCapacitance() / perMetre;
-        double birth = Double.isNaN(atCusp.cuspSourcePeak()) ? cc.cuspSourcePeak() : atCusp.cuspSourcePeak();
-        // The folds are what the limit is defined by: check that they appear at the cusp found, and
-        // where they do not (numerical cusp conditions of kinked curves can disagree with the fold
-        // scan) bracket and bisect on "the balance has a fold pair" instead.
-        double[] pairHi = pair(circuitAtLength, cusp * (1 + CUSP_CHECK));
-        boolean pairLo = pair(circuitAtLength, cusp * (1 - CUSP_CHECK)) != null;
-        if (pairHi == null || pairLo) {
-            double[] found = bisectCusp(circuitAtLength, cusp, pairHi != null);
-            if (found == null) {
+        double cusp;
+        double birth;
+        String window = null;
+        if (balance.settings().closedForms() && c0.magnetizing() instanceof PolynomialCurve) {
+            // Closed form: one fold structure, bistable for every C > C_min. Once more at the cusp
+            // itself for the birth voltage of the circuit with C = C_min.
+            CuspCondition atCusp = balance.cuspCondition(circuitAtLength.apply(first));
+            cusp = atCusp.minimumCapacitance() / perMetre;
+            birth = atCusp.cuspSourcePeak();
+        } else {
+            double[] main = mainCusp(circuitAtLength, first);
+            if (main == null) {
                 Arrays.fill(limits, Double.POSITIVE_INFINITY);
                 return new Result(Double.POSITIVE_INFINITY, Double.NaN, sourcePeaks, limits,
                         String.format("no fold pair up to %.4g m", maxLength));
             }
-            cusp = found[0];
-            birth = found[1];
+            cusp = main[0];
+            birth = main[1];
+            if (first < cusp * (1 - CUSP_CHECK)) {
+                double at = first * (1 + 10 * CUSP_CHECK);
+                double spread = foldFluxSpread(circuitAtLength, at);
+                double[] wf = windowFolds(circuitAtLength, at);
+                boolean brackets = false;
+                for (double e : sourcePeaks) {
+                    brackets |= wf != null && e >= wf[1] && e <= wf[0];
+                }
+                window = String.format("another fold pair at lower flux appears near %.4g m%s%s; it is not the pair whose "
+                        + "upper branch is the saturated state and does not set the limit", first,
+                        Double.isNaN(spread) ? "" : String.format(" (its folds %.2g %% apart in flux", 100 * spread)
+                                + String.format(", at %.4g and %.4g V peak)", wf[0], wf[1]),
+                        brackets ? "; CAUTION: a source lies between its folds, so two states coexist there at that source"
+                                : "");
+            }
         }
         Ladder ladder = new Ladder(circuitAtLength, cusp, birth);
         int below = 0;
@@ -162,71 +183,121 @@ public final class FoldLimit {
             note = String.format("the fold pair is born at %.4g V peak at the cusp length; lower sources meet the "
                     + "jump-down fold at longer lengths", birth);
         }
-        return new Result(cusp, birth, sourcePeaks, limits, note);
+        return new Result(cusp, birth, sourcePeaks, limits, window == null ? note : note + "; " + window);
     }
 
-    /** Relative distance from the cusp at which the fold scan must agree with the cusp condition. */
+    /** Relative distance below the lasting bistable region at which a cusp-condition minimum counts as a separate window. */
     static final double CUSP_CHECK = 1e-3;
     /** Relative accuracy of a bisected cusp length. */
     static final double CUSP_BISECTION = 1e-7;
 
-    /** {jump-up source, jump-down source} of the lowest fold pair at a length, V; null when there is none. */
-    private double[] pair(DoubleFunction<EquivalentCircuit> at, double length) {
-        List<Fold> folds = balance.folds(at.apply(length));
-        double up = Double.NaN;
-        for (Fold f : folds) {
-            if (f.direction() == FoldDirection.JUMP_UP && Double.isNaN(up)) {
-                up = f.sourcePeak();
-            } else if (f.direction() == FoldDirection.JUMP_DOWN && !Double.isNaN(up)) {
-                return new double[] {up, f.sourcePeak()};
+    /**
+     * One fold pair of a circuit's branch.
+     *
+     * @param upSource   source peak at the jump-up fold, V
+     * @param downSource source peak at the jump-down fold, V
+     * @param upFlux     flux at the jump-up fold, Wb-turn
+     * @param downFlux   flux at the jump-down fold, Wb-turn
+     */
+    record Pair(double upSource, double downSource, double upFlux, double downFlux) { }
+
+    /** The fold pairs at a length, ascending in flux (a jump-up fold followed by a jump-down fold). */
+    private List<Pair> pairs(DoubleFunction<EquivalentCircuit> at, double length) {
+        List<Pair> out = new ArrayList<>(2);
+        Fold up = null;
+        for (Fold f : balance.folds(at.apply(length))) {
+            if (f.direction() == FoldDirection.JUMP_UP) {
+                up = f;
+            } else if (up != null) {
+                out.add(new Pair(up.sourcePeak(), f.sourcePeak(), up.flux(), f.flux()));
+                up = null;
             }
         }
-        return null;
+        return out;
+    }
+
+    /** The highest-flux fold pair at a length (the one whose upper branch is the saturated state), or null. */
+    private Pair last(DoubleFunction<EquivalentCircuit> at, double length) {
+        List<Pair> p = pairs(at, length);
+        return p.isEmpty() ? null : p.get(p.size() - 1);
+    }
+
+    /** The pair whose jump-down flux is within {@link #TRACK} of a tracked flux, or null. */
+    private Pair near(DoubleFunction<EquivalentCircuit> at, double length, double trackedFlux) {
+        Pair best = null;
+        double bestD = Double.POSITIVE_INFINITY;
+        for (Pair p : pairs(at, length)) {
+            double d = Math.abs(Math.log(p.downFlux() / trackedFlux));
+            if (d < bestD) {
+                bestD = d;
+                best = p;
+            }
+        }
+        return bestD <= Math.log(TRACK) ? best : null;
     }
 
     /**
-     * The cusp by bisection on whether the fold scan finds a pair, starting near a guess:
-     * {length, birth voltage}, or null when no pair exists up to the longest length.
+     * Where the lasting bistable region begins: {length, birth voltage}, or null when no pair exists
+     * up to the longest length. From a length at least twice the guess with a fold pair, the
+     * highest-flux pair is followed down a fine geometric ladder (ratio {@link #FINE}), each rung
+     * taking the pair whose jump-down flux is nearest the previous one, until that pair is gone;
+     * then bisection to relative {@link #CUSP_BISECTION}. So windows of bistability at lower flux
+     * (other pairs, which may come and go or overlap it) do not move the limit.
      */
-    private double[] bisectCusp(DoubleFunction<EquivalentCircuit> at, double guess, boolean bistableAtGuess) {
+    private double[] mainCusp(DoubleFunction<EquivalentCircuit> at, double guess) {
+        double hi = 2 * guess;
+        Pair p = last(at, hi);
+        while (p == null) {
+            hi *= LADDER;
+            if (hi > maxLength * LADDER) {
+                return null;
+            }
+            p = last(at, hi);
+        }
+        double b = hi;
+        Pair pb = p;
         double a;
-        double b;
-        if (bistableAtGuess) {
-            b = guess;
-            a = guess / LADDER;
-            while (pair(at, a) != null) {
-                b = a;
-                a /= LADDER;
-                if (a < 1e-6) {
-                    return new double[] {0.0, pairOrNaN(at, b)};
-                }
+        while (true) {
+            a = b / FINE;
+            if (a < 1e-6) {
+                return new double[] {0.0, 0.5 * (pb.upSource() + pb.downSource())};
             }
-        } else {
-            a = guess;
-            b = guess * LADDER;
-            while (pair(at, b) == null) {
-                a = b;
-                b *= LADDER;
-                if (b > maxLength * LADDER) {
-                    return null;
-                }
+            Pair pa = near(at, a, pb.downFlux());
+            if (pa == null) {
+                break;
             }
+            b = a;
+            pb = pa;
         }
         while (b - a > CUSP_BISECTION * b) {
             double m = 0.5 * (a + b);
-            if (pair(at, m) != null) {
+            Pair pm = near(at, m, pb.downFlux());
+            if (pm != null) {
                 b = m;
+                pb = pm;
             } else {
                 a = m;
             }
         }
-        return new double[] {b, pairOrNaN(at, b)};
+        return new double[] {b, 0.5 * (pb.upSource() + pb.downSource())};
     }
 
-    /** Mid-voltage of the fold pair at a length (where the two folds have nearly merged), V. */
-    private double pairOrNaN(DoubleFunction<EquivalentCircuit> at, double length) {
-        double[] p = pair(at, length);
-        return p == null ? Double.NaN : 0.5 * (p[0] + p[1]);
+    /** Largest factor between the jump-down fluxes of one pair on neighbouring rungs: the fluxes move a few percent per rung. */
+    static final double TRACK = 1.15;
+
+    /** Ratio of the fine ladder that finds the start of the lasting bistable region: 2^(1/16), about 4.4 %. */
+    static final double FINE = Math.pow(2.0, 1.0 / 16);
+
+    /** Relative flux difference between the folds of the highest-flux pair at a length; NaN without a pair. */
+    private double foldFluxSpread(DoubleFunction<EquivalentCircuit> at, double length) {
+        Pair p = last(at, length);
+        return p == null ? Double.NaN : (p.downFlux() - p.upFlux()) / p.upFlux();
+    }
+
+    /** {jump-up, jump-down} source peaks of the highest-flux pair at a length, V; null without a pair. */
+    private double[] windowFolds(DoubleFunction<EquivalentCircuit> at, double length) {
+        Pair p = last(at, length);
+        return p == null ? null : new double[] {p.upSource(), p.downSource()};
     }
 
     /** Jump-down fold voltages on a geometric ladder of lengths from the cusp, computed as needed. */
@@ -243,18 +314,13 @@ public final class FoldLimit {
             rungs.add(new double[] {cusp, birth});
         }
 
-        /** The lowest jump-down fold source at a length, V; the birth voltage where the pair is not resolved yet. */
+        /** The jump-down fold source of the highest-flux pair at a length, V; the birth voltage where the pair is not resolved yet. */
         double jumpDown(double length) {
             if (length <= cusp) {
                 return birth;
             }
-            double best = Double.POSITIVE_INFINITY;
-            for (Fold f : balance.folds(at.apply(length))) {
-                if (f.direction() == FoldDirection.JUMP_DOWN) {
-                    best = Math.min(best, f.sourcePeak());
-                }
-            }
-            return Double.isInfinite(best) ? birth : best;
+            Pair p = last(at, length);
+            return p == null ? birth : p.downSource();
         }
 
         double crossing(double e) {

@@ -64,15 +64,18 @@ public record LimitRow(
      * @param length        length simulated, m
      * @param margin        supply voltage simulated, pu
      * @param events        switching events simulated (mirror images counted)
-     * @param ferroresonant events that ended ferroresonant
+     * @param offBranch     events that did not settle on the single steady state the balance predicts there
+     *                      (period 1, its phase, below the peak threshold)
      * @param undetermined  events with no verdict
-     * @param worstMode     the worst event's mode
-     * @param worstPeakPu   the worst event's peak, pu of the loop's rated peak
-     * @param confirmed     whether every event settled in the normal state
+     * @param predicted     the kind of the balance's single stable state there (normal, or ferroresonant for
+     *                      a single branch on its saturated side past the loop's linear resonance)
+     * @param worstMode     the highest-peak event's mode
+     * @param worstPeakPu   its peak, pu of the loop's rated peak
+     * @param confirmed     whether every event settled on the predicted state
      * @param note          one line on the outcome
      */
-    public record Check(double length, double margin, int events, int ferroresonant, int undetermined, String worstMode,
-                        double worstPeakPu, boolean confirmed, String note) { }
+    public record Check(double length, double margin, int events, int offBranch, int undetermined, String predicted,
+                        String worstMode, double worstPeakPu, boolean confirmed, String note) { }
 
     /** The limit at the margin nearest 1 pu (the rated-voltage column). */
     public MarginLimit ratedLimit() {

@@ -201,15 +201,31 @@ public final class LimitTable {
         Installation in = b.installation.withCableLength(length).withSourceLineVoltage(rated.margin() * b.installation.sourceLineVoltage());
         EquivalentCircuit circuit = Reduction.reduce(in, b.loopCurve).circuit();
         SwitchingEnsemble.Outcome o = c.ensemble().run(circuit, executor);
-        SwitchingEnsemble.Event worst = o.worst();
-        boolean ok = o.allNormal();
-        String note = ok ? "every event settled in the normal state, as the folds say"
-                : o.ferroresonant() + " of " + o.events().size() + " events ended ferroresonant"
-                + (o.undetermined() > 0 ? " and " + o.undetermined() + " undetermined" : "")
-                + " below the fold-based limit: a state the single-harmonic balance does not see (subharmonic or chaotic), "
-                + "or the few-percent error of the balance near the fold";
-        return new LimitRow.Check(length, rated.margin(), o.events().size(), o.ferroresonant(), o.undetermined(),
-                worst == null ? null : worst.mode().label(), worst == null ? Double.NaN : worst.peakPerUnit(), ok, note);
+        List<org.ferromap.balance.OperatingPoint> stable = Branches.stable(new SingleHarmonicBalance(), circuit);
+        double threshold = c.ensemble().simulation().peakThreshold();
+        int off = 0;
+        double worstPeak = Double.NaN;
+        String worstMode = null;
+        for (SwitchingEnsemble.Event e : o.events()) {
+            boolean on = e.period() == 1 && e.peakPerUnit() <= threshold && !Double.isNaN(e.phase())
+                    && stable.size() == 1 && Branches.distance(e.phase(), stable.get(0).voltagePhase()) <= Branches.PHASE_MATCH;
+            if (!on) {
+                off++;
+            }
+            if (worstMode == null || !(e.peakPerUnit() <= worstPeak)) {
+                worstPeak = e.peakPerUnit();
+                worstMode = e.mode().label();
+            }
+        }
+        String predicted = stable.size() == 1 ? stable.get(0).kind().label() : stable.size() + " stable states";
+        boolean ok = off == 0;
+        String note = ok ? String.format("every event settled on the single steady state the balance predicts there (%s branch, "
+                + "%.3g pu): no jump, no subharmonic or chaotic state", predicted, stable.get(0).voltagePerUnit())
+                : off + " of " + o.events().size() + " events settled elsewhere than the balance's single steady state ("
+                + predicted + ") below the fold-based limit: a subharmonic, chaotic or jumped state the single-harmonic "
+                + "balance does not see, or the few-percent error of the balance near the fold";
+        return new LimitRow.Check(length, rated.margin(), o.events().size(), off, o.undetermined(), predicted, worstMode,
+                worstPeak, ok, note);
     }
 
     /** Connection as written in studies. */

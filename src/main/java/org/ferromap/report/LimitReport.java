@@ -35,7 +35,7 @@ public final class LimitReport {
             header.add(String.format(Locale.ROOT, "limit at %.3g pu (m)", rows.get(0).limits().get(k).margin()));
         }
         header.addAll(List.of("linear criterion K", "linear criterion length (m)", "linear resonance length (m)",
-                "check length (m)", "check events", "check ferroresonant", "check confirmed", "note"));
+                "check length (m)", "check events", "check off predicted state", "check confirmed", "note"));
         List<List<?>> out = new ArrayList<>();
         for (LimitRow row : rows) {
             List<Object> c = new ArrayList<>(List.of(row.rating(), row.voltage(), row.connection(), row.cable(), row.openPhases(),
@@ -50,7 +50,7 @@ public final class LimitReport {
             LimitRow.Check ch = row.check();
             c.add(ch == null ? null : ch.length());
             c.add(ch == null ? null : ch.events());
-            c.add(ch == null ? null : ch.ferroresonant());
+            c.add(ch == null ? null : ch.offBranch());
             c.add(ch == null ? null : ch.confirmed());
             c.add(row.note());
             out.add(c);
@@ -86,7 +86,7 @@ public final class LimitReport {
             c.add(Figures.length(row.linearResonanceLength()));
             LimitRow.Check ch = row.check();
             c.add(ch == null ? "-" : ch.confirmed() ? "confirmed (" + ch.events() + " events)"
-                    : ch.ferroresonant() + " of " + ch.events() + " ferroresonant");
+                    : ch.offBranch() + " of " + ch.events() + " off the predicted state");
             c.add(row.exactness());
             cells.add(c);
         }
