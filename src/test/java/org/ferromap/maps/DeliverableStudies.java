@@ -47,6 +47,11 @@ final class DeliverableStudies {
      * 0.25 uF/km, one or two phases open, a per-unit table curve with a knee near 1.1 pu.
      */
     static String equipment(String connection, int open, String excitingCurrent, String noLoadLoss, String analyses) {
+        return equipment(connection, open, excitingCurrent, noLoadLoss, 1.0, analyses);
+    }
+
+    /** The same with the per-unit curve's currents multiplied by {@code k} (another core design). */
+    static String equipment(String connection, int open, String excitingCurrent, String noLoadLoss, double k, String analyses) {
         return String.join("\n",
                 "study: deliverable test installation",
                 "frequency: 60 Hz",
@@ -63,12 +68,12 @@ final class DeliverableStudies {
                 "    saturation:",
                 "      basis: per-unit",
                 "      table:",
-                "        - {flux: 0.5, current: 0.003}",
-                "        - {flux: 1.0, current: 0.01}",
-                "        - {flux: 1.1, current: 0.03}",
-                "        - {flux: 1.2, current: 0.12}",
-                "        - {flux: 1.3, current: 0.6}",
-                "        - {flux: 1.4, current: 2.5}",
+                "        - {flux: 0.5, current: " + 0.003 * k + "}",
+                "        - {flux: 1.0, current: " + 0.01 * k + "}",
+                "        - {flux: 1.1, current: " + 0.03 * k + "}",
+                "        - {flux: 1.2, current: " + 0.12 * k + "}",
+                "        - {flux: 1.3, current: " + 0.6 * k + "}",
+                "        - {flux: 1.4, current: " + 2.5 * k + "}",
                 "      air-core-inductance: 0.03",
                 "  cable:",
                 "    kind: screened",
@@ -83,11 +88,20 @@ final class DeliverableStudies {
         return StudyReader.read(equipment(connection, open, excitingCurrent, noLoadLoss, analyses), "deliverable-equipment.yaml");
     }
 
+    static Study equipmentStudy(String connection, int open, String excitingCurrent, String noLoadLoss, double k, String analyses) {
+        return StudyReader.read(equipment(connection, open, excitingCurrent, noLoadLoss, k, analyses), "deliverable-equipment.yaml");
+    }
+
     /**
      * An equipment-form study whose winding curve is a polynomial in absolute units (grounded wye
      * on belted cable, so the loop's curve is the winding's own and the closed forms apply).
      */
     static String polynomialEquipment(double a, double b, int n, String analyses) {
+        return polynomialEquipment("grounded-wye", a, b, n, analyses);
+    }
+
+    /** The same on another primary connection (delta and ungrounded wye reduce the curve: no closed form). */
+    static String polynomialEquipment(String connection, double a, double b, int n, String analyses) {
         return String.join("\n",
                 "study: deliverable polynomial installation",
                 "frequency: 60 Hz",
@@ -97,7 +111,7 @@ final class DeliverableStudies {
                 "  transformer:",
                 "    rating: 300 kVA",
                 "    primary-voltage: 12.47 kV",
-                "    connection: grounded-wye",
+                "    connection: " + connection,
                 "    core: separate",
                 "    exciting-current: 1 %",
                 "    no-load-loss: 400 W",
