@@ -26,7 +26,8 @@ import picocli.CommandLine.Parameters;
     "Core designs: studies that differ in their core data (curve, exciting current, loss).",
     "The magnetizing curves overlaid, the margin to the jump, the fold-based cable-length limits,",
     "the damping load needed, overvoltage maps on the same axes and colour scale, and a ranking",
-    "with its reasons. Map axes: the first study's map section, else cable length x supply voltage.",
+    "with its reasons. Map axes: cable length (5 m to twice the installed) x supply (0.8 to 1.2),",
+    "or the first study's map section with --use-map.",
     "Writes charts (PNG, SVG, PDF), CSV and JSON under <out>/<first study>/compare."})
 final class CompareCommand extends BaseCommand {
 
@@ -41,8 +42,11 @@ final class CompareCommand extends BaseCommand {
     boolean json;
 
     @Option(names = "--steps", paramLabel = "NX,NY", split = ",",
-            description = "Map cells along each axis (default: the first study's map section, else 40,16).")
+            description = "Map cells along each axis (default 40,17).")
     List<Integer> steps;
+
+    @Option(names = "--use-map", description = "Use the first study's map: section for the maps' axes.")
+    boolean useMap;
 
     @Mixin
     ThreadOptions threads;
@@ -70,6 +74,9 @@ final class CompareCommand extends BaseCommand {
             if (!s.isEquipmentForm()) {
                 throw new FerromapException(MessageKey.BAD_REQUEST, s.file() + ": a core comparison needs equipment-form studies");
             }
+        }
+        if (useMap) {
+            settings = settings.withStudyMap(read.get(0));
         }
         if (steps != null) {
             if (steps.size() != 2 || steps.get(0) < 2 || steps.get(1) < 2 || steps.get(0) > 400 || steps.get(1) > 400) {

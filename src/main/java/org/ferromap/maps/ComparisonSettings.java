@@ -18,7 +18,7 @@ import org.ferromap.study.SweepParameter;
  *
  * @param with     the other studies, relative to the study's folder (notebook use; the command
  *                 line names its studies itself)
- * @param x        the horizontal axis of the maps
+ * @param x        the horizontal axis of the maps (default cable length, see {@link #defaults})
  * @param y        the vertical axis
  * @param margins  supply voltages (pu) at which the fold-based limits are given; default 1.0, 1.05, 1.1
  */
@@ -73,30 +73,42 @@ public record ComparisonSettings(List<Path> with, AxisSpec x, AxisSpec y, double
         return margins.clone();
     }
 
-    /** Default axes from the first study: its map section if it has two axes, else cable length x supply voltage. */
+    /**
+     * Default axes from the first study: cable length from 5 m to twice the installed length (at
+     * least 1 km), log scale, 40 steps, against the supply from 0.8 to 1.2 times the study's, 17
+     * steps: short cables, where the designs' limits lie, and the installed case.
+     */
     public static ComparisonSettings defaults(Study first) {
         LimitSettings.requireEquipment(first);
-        StudyParameters p = new StudyParameters(first);
-        MapSettings m = first.map();
-        AxisSpec x;
-        AxisSpec y;
-        if (m != null && m.y() != null) {
-            x = spec(p, m.x());
-            y = spec(p, m.y());
-        } else {
-            double l = first.equipment().cableLength();
-            double v = first.equipment().sourceLineVoltage();
-            x = new AxisSpec(SweepParameter.CABLE_LENGTH, 10.0, Math.max(2 * l, 1000.0), 40, true);
-            y = new AxisSpec(SweepParameter.SOURCE_LINE_VOLTAGE, 0.9 * v, 1.2 * v, 16, false);
-        }
+        double l = first.equipment().cableLength();
+        double v = first.equipment().sourceLineVoltage();
+        AxisSpec x = new AxisSpec(SweepParameter.CABLE_LENGTH, 5.0, Math.max(2 * l, 1000.0), 40, true);
+        AxisSpec y = new AxisSpec(SweepParameter.SOURCE_LINE_VOLTAGE, 0.8 * v, 1.2 * v, 17, false);
         return new ComparisonSettings(List.of(), x, y, LimitSettings.DEFAULT_MARGINS);
+    }
+
+    /** The axes of the first study's {@code map:} section (two axes needed) instead of the defaults. */
+    public ComparisonSettings withStudyMap(Study first) {
+        MapSettings m = first.map();
+        if (m == null || m.y() == null) {
+            throw new FerromapException(MessageKey.BAD_REQUEST, first.file() + ": use-map needs a map: section with two axes");
+        }
+        StudyParameters p = new StudyParameters(first);
+        return new ComparisonSettings(with, spec(p, m.x()), spec(p, m.y()), margins);
     }
 
     /** The study's {@code analyses: compare:} block over the defaults. */
     public static ComparisonSettings from(Study study) {
         ComparisonSettings d = defaults(study);
         AnalysisBlock b = AnalysisBlock.of(study, "compare");
-        b.allowOnly("with", "steps", "margins");
+        b.allowOnly("with", "steps", "margins", "use-map");
+        if (b.flag("use-map", false)) {
+            if (study.map() == null || study.map().y() == null) {
+                b.problem("use-map", true, "needs a map: section with two axes in the study", MessageKey.BAD_REQUEST);
+            } else {
+                d = d.withStudyMap(study);
+            }
+        }
         List<Path> with = new ArrayList<>();
         Path dir = study.file() == null || study.file().getParent() == null ? Path.of(".") : study.file().getParent();
         for (String f : b.texts("with", List.of())) {

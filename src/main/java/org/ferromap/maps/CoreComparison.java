@@ -47,8 +47,8 @@ public final class CoreComparison {
     /** Category names by code (as the map cells write them). */
     public static final List<String> CATEGORY_NAMES = List.of("safe", "at-risk", "ferroresonant-only");
 
-    /** Curve samples per design. */
-    static final int CURVE_SAMPLES = 121;
+    /** Flux step of the curve samples, pu of rated peak flux. */
+    static final double CURVE_STEP = 0.01;
 
     private CoreComparison() {
     }
@@ -121,10 +121,11 @@ public final class CoreComparison {
         for (SaturationCurve.CurvePoint p : curve.definingPoints()) {
             top = Math.max(top, 1.05 * p.flux() / b.flux());
         }
-        double[] fx = new double[CURVE_SAMPLES];
-        double[] ix = new double[CURVE_SAMPLES];
-        for (int k = 0; k < CURVE_SAMPLES; k++) {
-            fx[k] = top * (k + 1) / CURVE_SAMPLES;
+        int samples = (int) Math.ceil(top / CURVE_STEP);
+        double[] fx = new double[samples];
+        double[] ix = new double[samples];
+        for (int k = 0; k < samples; k++) {
+            fx[k] = CURVE_STEP * (k + 1);
             ix[k] = curve.current(fx[k] * b.flux()) / b.current();
         }
         EquivalentCircuit c = s.circuit();

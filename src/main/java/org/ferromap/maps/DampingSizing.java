@@ -134,6 +134,10 @@ public final class DampingSizing {
                     + "(k = %.3g here, L_eq/Lm). On the secondary it acts through the leakage impedance, neglected here.", k));
         }
         notes.add("Equivalent circuit: " + study.exactness().explanation());
+        if (asBuilt != null && asBuilt.allNormal() && bistable) {
+            notes.add("As built, every switching event tried settled normal, yet the loop is bistable: a ferroresonant state "
+                    + "exists and other instants, residual fluxes or voltage swings can reach it. The cusp value removes it.");
+        }
         if (recommended == null) {
             notes.add("Ferroresonant or undetermined outcomes remain after " + settings.maxSteps()
                     + " steps: raise max-steps or the step factor, or consider another mitigation (gang-operated switching, "

@@ -106,17 +106,20 @@ public final class ComparisonReport {
     }
 
     static XYChart curves(ComparisonResult r) {
-        XYChart c = ChartFiles.xyChart("Magnetizing curves", "peak current (pu of rated peak current)",
-                "peak flux linkage (pu of rated peak flux)");
-        c.getStyler().setXAxisLogarithmic(true);
-        c.getStyler().setLegendPosition(org.knowm.xchart.style.Styler.LegendPosition.InsideSE);
+        XYChart c = ChartFiles.xyChart("Magnetizing curves", "peak flux linkage (pu of rated peak flux)",
+                "peak current (pu of rated peak current)");
+        c.getStyler().setYAxisLogarithmic(true);
+        c.getStyler().setXAxisMin(0.0);
+        c.getStyler().setXAxisDecimalPattern("0.0#");
+        c.getStyler().setXAxisTickMarkSpacingHint(120);
+        c.getStyler().setLegendPosition(org.knowm.xchart.style.Styler.LegendPosition.InsideNW);
         for (ComparisonResult.Design d : r.designs()) {
             List<Double> x = new ArrayList<>();
             List<Double> y = new ArrayList<>();
             for (int k = 0; k < d.curveFluxPu().length; k++) {
                 if (d.curveCurrentPu()[k] > 0) {
-                    x.add(d.curveCurrentPu()[k]);
-                    y.add(d.curveFluxPu()[k]);
+                    x.add(d.curveFluxPu()[k]);
+                    y.add(d.curveCurrentPu()[k]);
                 }
             }
             XYSeries s = c.addSeries(d.study(), x, y);

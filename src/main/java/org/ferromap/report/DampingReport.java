@@ -24,10 +24,6 @@ public final class DampingReport {
     private DampingReport() {
     }
 
-    /** Colours of the settled modes, in {@code SteadyMode} order. */
-    private static final Color[] MODE_COLOURS = {Palette.SAFE.darker(), Palette.FERRO_ONLY, Palette.AT_RISK.darker(),
-        new Color(86, 180, 233), new Color(120, 40, 140), Color.GRAY};
-
     /** Writes {prefix}-steps.*, {prefix}-arrester.* (when assessed), CSVs and {prefix}.json; returns the data file names. */
     public static List<String> write(DampingResult r, Path dir, String prefix) {
         List<String> files = new ArrayList<>();
@@ -140,7 +136,7 @@ public final class DampingReport {
                 counts.add(s.counts().get(modes.get(m)));
             }
             var s = c.addSeries(modes.get(m), labels, counts);
-            s.setFillColor(MODE_COLOURS[m % MODE_COLOURS.length]);
+            s.setFillColor(ModeColours.of(modes.get(m)));
         }
         return c;
     }
@@ -161,6 +157,8 @@ public final class DampingReport {
         si.setMarker(SeriesMarkers.NONE);
         si.setYAxisGroup(1);
         c.setYAxisGroupTitle(1, "current (A)");
+        c.getStyler().setYAxisGroupPosition(1, Styler.YAxisPosition.Right);
+        c.getStyler().putYAxisGroupDecimalPatternMap(1, "0.###E0");
         return c;
     }
 }

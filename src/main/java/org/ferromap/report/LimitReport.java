@@ -109,10 +109,14 @@ public final class LimitReport {
                     Figures.kv(row.voltage()));
             groups.computeIfAbsent(key, k -> new ArrayList<>()).add(row);
         }
-        XYChart c = ChartFiles.xyChart("Cable-length limit against rating", "transformer rating (kVA)", "cable length (m)");
+        double k = r.rows().isEmpty() ? Double.NaN : r.rows().get(0).linearK();
+        XYChart c = ChartFiles.xyChart("Cable-length limit at rated voltage (dashed: linear criterion, K = " + Figures.num(k) + ")",
+                "transformer rating (kVA)", "cable length (m)");
         c.getStyler().setXAxisLogarithmic(true);
         c.getStyler().setYAxisLogarithmic(true);
-        c.getStyler().setLegendPosition(org.knowm.xchart.style.Styler.LegendPosition.InsideSE);
+        c.getStyler().setXAxisLogarithmicDecadeOnly(false);
+        c.getStyler().setLegendPosition(org.knowm.xchart.style.Styler.LegendPosition.OutsideS);
+        c.getStyler().setChartTitleFont(new java.awt.Font(java.awt.Font.SANS_SERIF, java.awt.Font.BOLD, 13));
         int colour = 0;
         boolean any = false;
         for (Map.Entry<String, List<LimitRow>> g : groups.entrySet()) {
@@ -132,7 +136,7 @@ public final class LimitReport {
             }
             any = true;
             Color col = ChartFiles.PALETTE[colour++ % ChartFiles.PALETTE.length];
-            XYSeries s = c.addSeries(g.getKey() + ", folds", xs, ys);
+            XYSeries s = c.addSeries(g.getKey(), xs, ys);
             s.setLineColor(col);
             s.setMarkerColor(col);
             s.setMarker(SeriesMarkers.CIRCLE);
@@ -141,6 +145,7 @@ public final class LimitReport {
             lin.setLineColor(col);
             lin.setMarker(SeriesMarkers.NONE);
             lin.setLineStyle(ChartFiles.dashed());
+            lin.setShowInLegend(false);
         }
         return any ? java.util.Optional.of(c) : java.util.Optional.empty();
     }

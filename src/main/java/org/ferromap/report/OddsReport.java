@@ -99,11 +99,10 @@ public final class OddsReport {
             byMode.computeIfAbsent(run.mode(), k -> new ArrayList<>()).add(new double[] {Math.toDegrees(run.angle()),
                 run.residualFlux()});
         }
-        int k = 0;
         for (Map.Entry<String, List<double[]>> e : byMode.entrySet()) {
             double[] x = e.getValue().stream().mapToDouble(a -> a[0]).toArray();
             double[] y = e.getValue().stream().mapToDouble(a -> a[1]).toArray();
-            ChartFiles.markers(c, e.getKey() + " (" + x.length + ")", x, y, ChartFiles.PALETTE[k++ % ChartFiles.PALETTE.length]);
+            ChartFiles.markers(c, e.getKey() + " (" + x.length + ")", x, y, ModeColours.of(e.getKey()));
         }
         c.getStyler().setXAxisMin(0.0);
         c.getStyler().setXAxisMax(360.0);
