@@ -8,6 +8,7 @@ import org.ferromap.balance.CircuitParameter;
 import org.ferromap.balance.Fold;
 import org.ferromap.balance.HarmonicSettings;
 import org.ferromap.balance.MultiHarmonicBalance;
+import org.ferromap.balance.OperatingPoint;
 import org.ferromap.balance.SingleHarmonicBalance;
 import org.ferromap.circuit.EquivalentCircuit;
 import org.ferromap.continuation.Direction;
@@ -23,7 +24,7 @@ import org.ferromap.errors.MessageKey;
  */
 public final class CircuitOrbits {
 
-    /** Longest chain of branch switches {@link #explore} follows from one orbit. */
+    /** Most branches {@link #explore} traces from one starting orbit (its own and those reached by switching). */
     private static final int MAX_BRANCHES = 12;
 
     private CircuitOrbits() {
@@ -32,6 +33,26 @@ public final class CircuitOrbits {
     /** The circuit at each value of a parameter, as a per-unit system. */
     public static DoubleFunction<CircuitSystem> family(EquivalentCircuit base, CircuitParameter parameter) {
         return v -> CircuitSystem.of(parameter.apply(base, v));
+    }
+
+    /**
+     * A family of circuits as per-unit systems, refusing a member whose per-unit bases (frequency,
+     * rated peak) differ from the base's: states in per unit are carried and compared from one
+     * value to the next, which needs one scale for all.
+     *
+     * @throws FerromapException BAD_REQUEST (when a member is built) if the bases differ
+     */
+    public static DoubleFunction<CircuitSystem> family(DoubleFunction<EquivalentCircuit> circuits, EquivalentCircuit base) {
+        double omega = base.omega();
+        double ratedPeak = base.ratedPeak();
+        return v -> {
+            EquivalentCircuit c = circuits.apply(v);
+            if (Math.abs(c.omega() - omega) > 1e-12 * omega || Math.abs(c.ratedPeak() - ratedPeak) > 1e-12 * ratedPeak) {
+                throw new FerromapException(MessageKey.BAD_REQUEST, "the parameter changes the frequency or the rated voltage "
+                        + "(the per-unit bases) at " + v + "; orbits and sweeps need both fixed");
+            }
+            return CircuitSystem.of(c);
+        };
     }
 
     /**
@@ -106,7 +127,9 @@ public final class CircuitOrbits {
      * Explores the orbits of a circuit over a parameter window: settles from each initial state at
      * the base value, identifies the orbit (symmetric on the half-period map, else the least k
      * &lt;= maxPeriod), continues it both ways, and switches at every period doubling and
-     * symmetry-breaking pitchfork while the period stays &lt;= maxPeriod.
+     * symmetry-breaking pitchfork while the period stays &lt;= maxPeriod. Same as
+     * {@link #explore(DoubleFunction, double, List, int, int, OrbitContinuationSettings)} with the
+     * family {@code v -> parameter.apply(base, v)} started at the base's value and periods 1 to maxPeriod.
      *
      * @param base the circuit; the parameter's value in it is the start, inside the window
      * @param parameter what to vary
@@ -117,67 +140,248 @@ public final class CircuitOrbits {
      */
     public static List<OrbitBranch> explore(EquivalentCircuit base, CircuitParameter parameter, List<double[]> initialStates,
             int maxPeriod, OrbitContinuationSettings settings) {
+        return explore(v -> parameter.apply(base, v), parameter.valueOf(base), initialStates, 1, maxPeriod, settings);
+    }
+
+    /**
+     * Explores the orbits of a family of circuits, one per value of a parameter that may be any
+     * function of the value (an equipment-level quantity such as a cable length, re-reduced for each
+     * value). The orbits continued start from two kinds of seed at {@code start}:
+     * <ul>
+     * <li>the initial states, each simulated 300 source periods; the orbit through the settled state
+     * is identified (the half-period map first when minPeriod = 1, then P^k for k = minPeriod..maxPeriod,
+     * the first whose least period lies in that range and which passes within 5 % of the settled
+     * state; failing that, the first orbit of such a period that shooting reaches from it, which is
+     * how unstable orbits inside a torus or a chaotic set are found).</li>
+     * </ul>
+     * Each new orbit is continued both ways (one way when the branch closes), and at every period
+     * doubling and symmetry-breaking pitchfork the new branch is followed while its period stays
+     * &lt;= maxPeriod. An orbit already met (any of its k states on the section, or those of its
+     * mirror image x(t) -&gt; -x(t + T/2), which has the same multipliers and bifurcations) is not
+     * continued again, and a bifurcation already switched at is not switched at again.
+     *
+     * @param circuits the circuit at each parameter value, SI; the frequency and rated peak (the
+     *        per-unit bases) must not depend on the value
+     * @param start the value at which the initial states settle, inside the window
+     * @param initialStates {flux Wb-turn, voltage V} pairs to settle from
+     * @param minPeriod least period of the orbits started from, 1 to maxPeriod
+     * @param maxPeriod largest period followed, minPeriod to 8
+     * @param settings continuation settings with the window in the parameter's SI unit
+     * @return the branches traced, in the order traced
+     * @throws FerromapException OUT_OF_RANGE for periods outside 1..8; BAD_REQUEST when the family
+     *         changes the per-unit bases
+     */
+    public static List<OrbitBranch> explore(DoubleFunction<EquivalentCircuit> circuits, double start, List<double[]> initialStates,
+            int minPeriod, int maxPeriod, OrbitContinuationSettings settings) {
         if (maxPeriod < 1 || maxPeriod > 8) {
             throw new FerromapException(MessageKey.OUT_OF_RANGE, "largest period = " + maxPeriod + " is not allowed; expected 1 to 8");
         }
-        DoubleFunction<CircuitSystem> family = family(base, parameter);
-        double p0 = parameter.valueOf(base);
-        CircuitSystem sys = family.apply(p0);
-        OrbitContinuation oc = new OrbitContinuation(settings);
+        if (minPeriod < 1 || minPeriod > maxPeriod) {
+            throw new FerromapException(MessageKey.OUT_OF_RANGE, "least period = " + minPeriod + " is not allowed; expected 1 to "
+                    + maxPeriod);
+        }
+        EquivalentCircuit base = circuits.apply(start);
+        DoubleFunction<CircuitSystem> family = family(circuits, base);
+        CircuitSystem sys = family.apply(start);
         Shooting shooting = new Shooting(settings.shooting().withCheckAccuracy(false));
-        List<OrbitBranch> branches = new ArrayList<>();
-        List<double[]> seen = new ArrayList<>();
+        Explorer ex = new Explorer(new OrbitContinuation(settings), family, maxPeriod, settings);
+        if (minPeriod == 1) {
+            // Harmonic-balance seeds at the start and at both ends of the window: the normal state may
+            // exist only at one end and the ferroresonant one only at the other.
+            List<Double> at = new ArrayList<>(List.of(start));
+            for (double edge : new double[] {settings.continuation().pMin(), settings.continuation().pMax()}) {
+                if (Double.isFinite(edge) && edge != start) {
+                    at.add(edge);
+                }
+            }
+            for (double p : at) {
+                CircuitSystem sp = family.apply(p);
+                for (double[] seed : balanceSeeds(circuits.apply(p))) {
+                    shooting.trySolve(sp, sp.scaledState(seed[0], seed[1]), Section.halfPeriod())
+                            .filter(o -> o.period() == 1).ifPresent(o -> ex.start(sp, o, p));
+                }
+            }
+        }
         for (double[] init : initialStates) {
             double[] settled = settledState(base, init[0], init[1], 300, settings.shooting().tolerance());
             double[] z = sys.scaledState(settled[0], settled[1]);
-            Optional<Orbit> orbit = shooting.trySolve(sys, z, Section.halfPeriod())
-                    .filter(o -> Shooting.distance(o.state(), z, 2) < 0.05 * (1 + SmallLinear.norm(z, 2)));
-            Section section = Section.halfPeriod();
-            for (int k = 1; orbit.isEmpty() && k <= maxPeriod; k++) {
-                section = Section.periods(k);
-                orbit = shooting.trySolve(sys, z, section);
-            }
-            if (orbit.isEmpty() || isSeen(seen, orbit.get().state())) {
+            identify(shooting, sys, z, minPeriod, maxPeriod).ifPresent(o -> ex.start(sys, o, start));
+        }
+        return ex.branches;
+    }
+
+    /**
+     * Section states (t = 0) of the harmonic-balance steady states of a circuit, SI: each
+     * single-harmonic state refined by the multi-harmonic balance (nine odd harmonics: near the
+     * exact orbit even on a steep curve, where the single-harmonic state is too far for Newton),
+     * or the single-harmonic state itself when the refinement fails. None when the balance has none.
+     */
+    private static List<double[]> balanceSeeds(EquivalentCircuit c) {
+        List<double[]> out = new ArrayList<>();
+        List<OperatingPoint> points;
+        try {
+            points = new SingleHarmonicBalance().operatingPoints(c);
+        } catch (FerromapException e) {
+            return out; // no single-harmonic states (an undriven loop, a curve that never balances): settled states only
+        }
+        MultiHarmonicBalance multi = new MultiHarmonicBalance(c, HarmonicSettings.DEFAULTS);
+        double fluxBase = c.ratedPeak() / c.omega();
+        for (OperatingPoint op : points) {
+            if (!(op.flux() > 0)) {
                 continue;
             }
-            Orbit o = orbit.get();
-            seen.add(o.state());
+            try {
+                double[] x = multi.solve(multi.seed(op)).perUnit();
+                out.add(new double[] {multi.basis().evaluate(x, 0, 0) * fluxBase, multi.basis().evaluate(x, 0, 1) * c.ratedPeak()});
+            } catch (FerromapException e) {
+                // lambda = Lambda cos(w t + phi + voltagePhase - pi): the balance package's convention (MultiHarmonicBalance.seed)
+                out.add(balanceSeed(c, op.flux(), c.sourceAngle() + op.voltagePhase() - Math.PI));
+            }
+        }
+        return out;
+    }
+
+    /** The continuations of one exploration, with what has been met so far. Not thread-safe. */
+    private static final class Explorer {
+        private final OrbitContinuation oc;
+        private final DoubleFunction<CircuitSystem> family;
+        private final int maxPeriod;
+        private final PeriodMap map;
+        private final double pScale;
+        private final List<OrbitBranch> branches = new ArrayList<>();
+        /** {parameter, state...} of the orbits met: starts (all their states and mirrors) and branch ends. */
+        private final List<double[]> seen = new ArrayList<>();
+        private final List<LocatedBifurcation> switched = new ArrayList<>();
+        private int firstOfStart;
+
+        Explorer(OrbitContinuation oc, DoubleFunction<CircuitSystem> family, int maxPeriod, OrbitContinuationSettings settings) {
+            this.oc = oc;
+            this.family = family;
+            this.maxPeriod = maxPeriod;
+            this.map = new PeriodMap(2, settings.shooting().tolerance(), settings.shooting().maxStepsPerPeriod());
+            double lo = settings.continuation().pMin();
+            double hi = settings.continuation().pMax();
+            this.pScale = Double.isFinite(hi - lo) ? hi - lo : 1.0;
+        }
+
+        /** Continues an orbit found at p0 unless it, or its mirror image, was met before. */
+        void start(CircuitSystem sys, Orbit o, double p0) {
+            List<double[]> states = states(sys, o);
+            for (double[] z : states) {
+                if (isSeen(p0, z)) {
+                    return;
+                }
+            }
+            for (double[] z : states) {
+                seen.add(new double[] {p0, z[0], z[1]});
+            }
+            firstOfStart = branches.size();
             Section s = o.symmetric() ? Section.halfPeriod() : Section.periods(o.period());
             for (Direction d : Direction.values()) {
                 OrbitBranch b = oc.trace(family, o.state(), p0, s, d);
-                branches.add(b);
-                switchAll(oc, family, b, maxPeriod, branches);
+                add(b);
+                switchAll(b);
+                if (b.stopReason().equals("BRANCH_CLOSED")) {
+                    break; // the other way round is the same loop
+                }
             }
         }
-        return branches;
+
+        /** Keeps a branch and remembers its end points (where later seeds at the window's ends meet it). */
+        private void add(OrbitBranch b) {
+            branches.add(b);
+            if (b.size() > 0) {
+                for (int i : new int[] {0, b.size() - 1}) {
+                    seen.add(new double[] {b.parameter(i), b.state(i, 0), b.state(i, 1)});
+                }
+            }
+        }
+
+        /** Whether a state at p was met: the same parameter (to 1e-7 of the window), the same state (to 1e-5, per unit). */
+        private boolean isSeen(double p, double[] z) {
+            for (double[] e : seen) {
+                if (Math.abs(e[0] - p) <= 1e-7 * pScale
+                        && Math.hypot(e[1] - z[0], e[2] - z[1]) < 1e-5 * (1 + SmallLinear.norm(z, 2))) {
+                    return true;
+                }
+            }
+            return false;
+        }
+
+        /** The orbit's states on the section (z, P z, ..., P^(k-1) z) and those of its mirror image Q(z). */
+        private List<double[]> states(CircuitSystem sys, Orbit o) {
+            List<double[]> out = new ArrayList<>();
+            double[] z = o.state();
+            double[] m = new double[2];
+            boolean mirror = !o.symmetric() && map.applyHalf(sys, z, m, null) == DormandPrince853.Status.OK;
+            for (int j = 0; j < o.period(); j++) {
+                out.add(z.clone());
+                if (mirror) {
+                    out.add(m.clone());
+                }
+                if (j + 1 < o.period() && (map.apply(sys, z, 1, z, null) != DormandPrince853.Status.OK
+                        || mirror && map.apply(sys, m, 1, m, null) != DormandPrince853.Status.OK)) {
+                    break;
+                }
+            }
+            return out;
+        }
+
+        private void switchAll(OrbitBranch b) {
+            for (LocatedBifurcation at : b.bifurcations()) {
+                if (branches.size() - firstOfStart >= MAX_BRANCHES) {
+                    return;
+                }
+                boolean doubling = at.type() == BifurcationType.PERIOD_DOUBLING && 2 * at.period() <= maxPeriod;
+                boolean pitchfork = at.type() == BifurcationType.PITCHFORK && at.section().half();
+                if (!doubling && !pitchfork || wasSwitched(at)) {
+                    continue;
+                }
+                switched.add(at);
+                Optional<OrbitBranch> next = oc.switchBranch(family, at);
+                if (next.isPresent() && next.get().size() > 0) {
+                    add(next.get());
+                    switchAll(next.get());
+                }
+            }
+        }
+
+        /** A bifurcation of the same type and period at the same parameter (to 1e-7 of the window) was switched at already. */
+        private boolean wasSwitched(LocatedBifurcation at) {
+            for (LocatedBifurcation s : switched) {
+                if (s.type() == at.type() && s.period() == at.period() && Math.abs(s.parameter() - at.parameter()) <= 1e-7 * pScale) {
+                    return true;
+                }
+            }
+            return false;
+        }
     }
 
-    private static void switchAll(OrbitContinuation oc, DoubleFunction<CircuitSystem> family, OrbitBranch b, int maxPeriod,
-            List<OrbitBranch> out) {
-        for (LocatedBifurcation at : b.bifurcations()) {
-            if (out.size() >= MAX_BRANCHES) {
-                return;
-            }
-            boolean doubling = at.type() == BifurcationType.PERIOD_DOUBLING && 2 * at.period() <= maxPeriod;
-            boolean pitchfork = at.type() == BifurcationType.PITCHFORK && at.section().half();
-            if (!doubling && !pitchfork) {
+    /** The orbit through a settled state (see {@link #explore(DoubleFunction, double, List, int, int, OrbitContinuationSettings)}). */
+    private static Optional<Orbit> identify(Shooting shooting, CircuitSystem sys, double[] z, int minPeriod, int maxPeriod) {
+        List<Section> sections = new ArrayList<>();
+        if (minPeriod == 1) {
+            sections.add(Section.halfPeriod());
+        }
+        for (int k = minPeriod; k <= maxPeriod; k++) {
+            sections.add(Section.periods(k));
+        }
+        double near = 0.05 * (1 + SmallLinear.norm(z, 2));
+        Optional<Orbit> fallback = Optional.empty();
+        for (Section section : sections) {
+            Optional<Orbit> o = shooting.trySolve(sys, z, section)
+                    .filter(x -> x.period() >= minPeriod && x.period() <= maxPeriod);
+            if (o.isEmpty()) {
                 continue;
             }
-            Optional<OrbitBranch> next = oc.switchBranch(family, at);
-            if (next.isPresent() && next.get().size() > 0) {
-                out.add(next.get());
-                switchAll(oc, family, next.get(), maxPeriod, out);
+            if (Shooting.distance(o.get().state(), z, 2) < near) {
+                return o;
+            }
+            if (fallback.isEmpty() && !section.half()) {
+                fallback = o;
             }
         }
-    }
-
-    private static boolean isSeen(List<double[]> seen, double[] z) {
-        for (double[] s : seen) {
-            if (Shooting.distance(s, z, 2) < 1e-6 * (1 + SmallLinear.norm(z, 2))) {
-                return true;
-            }
-        }
-        return false;
+        return fallback;
     }
 
     /**
@@ -212,6 +416,17 @@ public final class CircuitOrbits {
 
     /** Branches as the contract's {@code orbits} object, in SI. */
     public static OrbitsReport report(EquivalentCircuit base, CircuitParameter parameter, List<OrbitBranch> branches) {
+        return report(base, parameter.name(), parameter.unit(), branches);
+    }
+
+    /**
+     * Branches as the contract's {@code orbits} object, in SI, for a parameter given by name.
+     *
+     * @param base a circuit of the family (for the per-unit bases)
+     * @param parameter the parameter's name
+     * @param unit its SI unit
+     */
+    public static OrbitsReport report(EquivalentCircuit base, String parameter, String unit, List<OrbitBranch> branches) {
         List<OrbitPoint> points = new ArrayList<>();
         List<OrbitBifurcation> bifurcations = new ArrayList<>();
         CircuitSystem sys = CircuitSystem.of(base);
@@ -225,7 +440,7 @@ public final class CircuitOrbits {
                 bifurcations.add(at.toRecord());
             }
         }
-        return new OrbitsReport(parameter.name(), parameter.unit(), points, bifurcations);
+        return new OrbitsReport(parameter, unit, points, bifurcations);
     }
 
     /**
@@ -248,8 +463,44 @@ public final class CircuitOrbits {
         return BruteForceSweep.sweep(family(base, parameter), values, scaled, settings);
     }
 
+    /**
+     * The brute-force diagram over a family of circuits, one per value of a parameter that may be
+     * any function of the value (see {@link #family(DoubleFunction, EquivalentCircuit)}).
+     *
+     * @param circuits the circuit at each value, SI; frequency and rated peak must not depend on it
+     * @param values strictly increasing values, SI
+     * @param initialStates {flux Wb-turn, voltage V} pairs
+     * @param settings sweep settings
+     * @return the runs (states in per unit of the circuits' bases: use {@link #sweepReport} for SI)
+     */
+    public static List<SweepRun> sweep(DoubleFunction<EquivalentCircuit> circuits, double[] values, List<double[]> initialStates,
+            SweepSettings settings) {
+        if (values == null || values.length == 0) {
+            throw new FerromapException(MessageKey.BAD_REQUEST, "the sweep needs at least one parameter value");
+        }
+        EquivalentCircuit base = circuits.apply(values[0]);
+        CircuitSystem sys = CircuitSystem.of(base);
+        List<double[]> scaled = new ArrayList<>();
+        for (double[] s : initialStates) {
+            scaled.add(sys.scaledState(s[0], s[1]));
+        }
+        return BruteForceSweep.sweep(family(circuits, base), values, scaled, settings);
+    }
+
     /** Sweep runs as the contract's {@code sweep} object, in SI; failed values are left out. */
     public static SweepReport sweepReport(EquivalentCircuit base, CircuitParameter parameter, List<SweepRun> runs) {
+        return sweepReport(base, parameter.name(), parameter.unit(), runs);
+    }
+
+    /**
+     * Sweep runs as the contract's {@code sweep} object, in SI, for a parameter given by name;
+     * failed values are left out.
+     *
+     * @param base a circuit of the family (for the per-unit bases)
+     * @param parameter the parameter's name
+     * @param unit its SI unit
+     */
+    public static SweepReport sweepReport(EquivalentCircuit base, String parameter, String unit, List<SweepRun> runs) {
         CircuitSystem sys = CircuitSystem.of(base);
         List<SweepSample> samples = new ArrayList<>();
         for (SweepRun r : runs) {
@@ -261,6 +512,6 @@ public final class CircuitOrbits {
                 }
             }
         }
-        return new SweepReport(parameter.name(), parameter.unit(), samples);
+        return new SweepReport(parameter, unit, samples);
     }
 }
