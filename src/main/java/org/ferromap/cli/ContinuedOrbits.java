@@ -9,6 +9,7 @@ import org.ferromap.balance.FoldDirection;
 import org.ferromap.balance.HarmonicSettings;
 import org.ferromap.balance.SingleHarmonicBalance;
 import org.ferromap.circuit.EquivalentCircuit;
+import org.ferromap.continuation.ContinuationSettings;
 import org.ferromap.errors.FerromapException;
 import org.ferromap.orbits.CircuitOrbits;
 import org.ferromap.orbits.CircuitSystem;
@@ -188,7 +189,12 @@ final class ContinuedOrbits {
     static ContinuedOrbits explore(VaryOptions.Range range, double start, List<double[]> initial, int minPeriod, int maxPeriod,
             int maxPoints, boolean compareFolds) {
         OrbitContinuationSettings d = OrbitContinuationSettings.DEFAULTS;
-        OrbitContinuationSettings settings = d.withContinuation(d.continuation().withMaxSteps(maxPoints)).withWindow(range.from(), range.to());
+        ContinuationSettings c = d.continuation();
+        // Corrector tolerance 1e-8 (scaled) instead of the engine's 1e-9: with a tabulated curve
+        // (C1 interpolation) the shooting residual is noisy at about 1e-9 and the corrector then fails
+        // to start or crawls; 1e-8 of the state's size is still far below what a chart or the JSON shows.
+        c = c.withMaxSteps(maxPoints).withNewton(1e-8, c.maxNewtonIterations(), c.targetNewtonIterations());
+        OrbitContinuationSettings settings = d.withContinuation(c).withWindow(range.from(), range.to());
         List<OrbitBranch> branches = CircuitOrbits.explore(range.circuits(), start, initial, minPeriod, maxPeriod, settings);
         return new ContinuedOrbits(range, start, branches, compareFolds);
     }
@@ -315,7 +321,7 @@ final class ContinuedOrbits {
         }
         for (BranchJson b : branchList) {
             if (b.points() == 0) {
-                o.printf("    %2d  period %d on %-16s no points: %s%n", b.branch(), b.period(), b.map(), b.detail());
+                o.printf("    %2d  period %d on %-16s not continued: %s%n", b.branch(), b.period(), b.map(), b.detail());
             } else {
                 o.printf("    %2d  period %d on %-16s %4d points, %s to %s %s  (%s)%n", b.branch(), b.period(), b.map(),
                         b.points(), g(b.from(), 6), g(b.to(), 6), u, b.stop().toLowerCase().replace('_', ' '));

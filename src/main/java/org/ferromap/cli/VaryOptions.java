@@ -61,7 +61,10 @@ final class VaryOptions {
             throw new FerromapException(MessageKey.BAD_REQUEST, "--vary " + vary + " is not supported here" + why
                     + "; allowed: " + String.join(", ", allowed));
         }
-        sp.parameter(vary); // refuses equipment-only parameters on circuit studies, listing the allowed ones
+        if (p.equipmentOnly() && !study.isEquipmentForm()) {
+            throw new FerromapException(MessageKey.BAD_REQUEST, "--vary " + vary + " needs an equipment-form study (equipment:); "
+                    + "allowed for this circuit-form study: " + String.join(", ", allowed));
+        }
         double own = sp.valueOf(p);
         double a = bound("--from", from, p, own);
         double b = bound("--to", to, p, own);

@@ -281,8 +281,8 @@ public final class CircuitOrbits {
                 OrbitBranch b = oc.trace(family, o.state(), p0, s, d);
                 add(b);
                 switchAll(b);
-                if (b.stopReason().equals("BRANCH_CLOSED")) {
-                    break; // the other way round is the same loop
+                if (b.stopReason().equals("BRANCH_CLOSED") || b.stopReason().equals("START_FAILED")) {
+                    break; // the other way round is the same loop, or starts from the same failed correction
                 }
             }
         }
