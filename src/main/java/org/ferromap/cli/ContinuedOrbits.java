@@ -18,6 +18,7 @@ import org.ferromap.orbits.LocatedBifurcation;
 import org.ferromap.orbits.OrbitBifurcation;
 import org.ferromap.orbits.OrbitBranch;
 import org.ferromap.orbits.OrbitContinuationSettings;
+import org.ferromap.orbits.OrbitExtent;
 import org.ferromap.orbits.OrbitPoint;
 import org.ferromap.orbits.OrbitsReport;
 import org.ferromap.report.Csv;
@@ -32,8 +33,8 @@ import org.ferromap.study.SweepParameter;
  */
 final class ContinuedOrbits {
 
-    /** Integration tolerance of the extra iterates drawn for period-k branches (the shooting's own, 1e-11). */
-    private static final double ITERATE_TOLERANCE = OrbitContinuationSettings.DEFAULTS.shooting().tolerance();
+    /** Integration tolerance when following each orbit for its section states and peaks (the shooting's own, 1e-11). */
+    private static final double EXTENT_TOLERANCE = OrbitContinuationSettings.DEFAULTS.shooting().tolerance();
 
     /**
      * One orbit, as the contract lists it ({@code points[]}), with the branch it belongs to.
@@ -45,9 +46,11 @@ final class ContinuedOrbits {
      * @param multipliers Floquet multipliers over the period, [re, im] pairs
      * @param stable every multiplier inside the unit circle
      * @param branch index into {@code branches}
+     * @param peakVoltage largest |v(t)| over the orbit's period, V (null when the orbit could not be followed)
+     * @param peakFlux largest |lambda(t)| over the orbit's period, Wb-turn (null likewise)
      */
     record PointJson(double parameter, int period, double flux, double voltage, List<List<Double>> multipliers, boolean stable,
-                     int branch) { }
+                     int branch, double peakVoltage, double peakFlux) { }
 
     /**
      * A located bifurcation ({@code bifurcations[]}).
@@ -59,8 +62,10 @@ final class ContinuedOrbits {
      * @param voltage its terminal voltage on the section, V
      * @param located false when the location did not converge (values interpolated between branch points)
      * @param branch index into {@code branches}
+     * @param peakVoltage largest |v(t)| over the period of the orbit that bifurcates, V
      */
-    record BifurcationJson(String type, double parameter, int period, double flux, double voltage, boolean located, int branch) { }
+    record BifurcationJson(String type, double parameter, int period, double flux, double voltage, boolean located, int branch,
+                           double peakVoltage) { }
 
     /**
      * A continued branch.
@@ -91,8 +96,10 @@ final class ContinuedOrbits {
     private final List<PointJson> points = new ArrayList<>();
     private final List<BifurcationJson> bifurcations = new ArrayList<>();
     private final List<BranchJson> branchList = new ArrayList<>();
-    private final List<OrbitCharts.Curve> curves = new ArrayList<>();
-    private final List<OrbitCharts.Mark> marks = new ArrayList<>();
+    private final List<OrbitCharts.Curve> sectionCurves = new ArrayList<>();
+    private final List<OrbitCharts.Mark> sectionMarks = new ArrayList<>();
+    private final List<OrbitCharts.Curve> peakCurves = new ArrayList<>();
+    private final List<OrbitCharts.Mark> peakMarks = new ArrayList<>();
     private final List<FoldJson> folds;
     private final String foldNote;
 
@@ -103,27 +110,58 @@ final class ContinuedOrbits {
         EquivalentCircuit base = range.circuit(start);
         CircuitSystem sys = CircuitSystem.of(base);
         OrbitsReport report = CircuitOrbits.report(base, range.name(), range.unitLabel(), branches);
-        int next = 0;
         for (int b = 0; b < branches.size(); b++) {
             OrbitBranch br = branches.get(b);
+            int k = br.section().half() ? 1 : br.period();
             double lo = Double.NaN;
             double hi = Double.NaN;
+            List<Double> cp = new ArrayList<>();
+            List<Boolean> cs = new ArrayList<>();
+            List<Double> cPeak = new ArrayList<>();
+            List<double[]> cSection = new ArrayList<>();
             for (int i = 0; i < br.size(); i++) {
-                OrbitPoint p = report.points().get(next++);
-                points.add(new PointJson(p.parameter(), p.period(), p.flux(), p.voltage(), pairs(p.multipliers()), p.stable(), b));
+                OrbitPoint p = report.points().get(points.size());
+                OrbitExtent e = extent(p.parameter(), p.flux(), p.voltage(), k);
+                points.add(new PointJson(p.parameter(), p.period(), p.flux(), p.voltage(), pairs(p.multipliers()), p.stable(), b,
+                        e == null ? Double.NaN : e.peakVoltage(), e == null ? Double.NaN : e.peakFlux()));
                 lo = Double.isNaN(lo) ? p.parameter() : Math.min(lo, p.parameter());
                 hi = Double.isNaN(hi) ? p.parameter() : Math.max(hi, p.parameter());
+                if (e != null) {
+                    cp.add(p.parameter());
+                    cs.add(p.stable());
+                    cPeak.add(e.peakVoltage());
+                    cSection.add(e.voltage());
+                }
             }
             branchList.add(new BranchJson(b, br.period(), br.section().toString(), br.size(), br.size() == 0 ? null : lo,
                     br.size() == 0 ? null : hi, br.stopReason(), br.stopDetail()));
+            if (!cp.isEmpty()) {
+                double[] px = cp.stream().mapToDouble(Double::doubleValue).toArray();
+                boolean[] st = new boolean[cs.size()];
+                for (int i = 0; i < st.length; i++) {
+                    st[i] = cs.get(i);
+                }
+                peakCurves.add(new OrbitCharts.Curve(b, br.period(), px, cPeak.stream().mapToDouble(Double::doubleValue).toArray(), st));
+                for (int j = 0; j < k; j++) {
+                    double[] v = new double[px.length];
+                    for (int i = 0; i < v.length; i++) {
+                        v[i] = cSection.get(i)[j];
+                    }
+                    sectionCurves.add(new OrbitCharts.Curve(b, br.period(), px, v, st));
+                }
+            }
             for (LocatedBifurcation at : br.bifurcations()) {
                 OrbitBifurcation r = at.toRecord();
                 double flux = sys.flux(at.state()[0]);
                 double voltage = sys.voltage(at.state()[1]);
-                bifurcations.add(new BifurcationJson(r.type(), r.parameter(), r.period(), flux, voltage, at.located(), b));
-                marks.add(new OrbitCharts.Mark(b, r.type(), r.parameter(), voltage));
+                OrbitExtent e = extent(r.parameter(), flux, voltage, at.section().half() ? 1 : at.period());
+                double peak = e == null ? Double.NaN : e.peakVoltage();
+                bifurcations.add(new BifurcationJson(r.type(), r.parameter(), r.period(), flux, voltage, at.located(), b, peak));
+                sectionMarks.add(new OrbitCharts.Mark(b, r.type(), r.parameter(), voltage));
+                if (e != null) {
+                    peakMarks.add(new OrbitCharts.Mark(b, r.type(), r.parameter(), peak));
+                }
             }
-            addCurves(b, br, next - br.size(), report);
         }
         if (!compareFolds) {
             folds = null;
@@ -199,41 +237,12 @@ final class ContinuedOrbits {
         return new ContinuedOrbits(range, start, branches, compareFolds);
     }
 
-    /** The branch's k iterates on the section as curves (a period-k orbit meets t = 0 mod T at k states). */
-    private void addCurves(int b, OrbitBranch br, int first, OrbitsReport report) {
-        int n = br.size();
-        if (n == 0) {
-            return;
-        }
-        int k = br.section().half() ? 1 : br.period();
-        double[] p = new double[n];
-        boolean[] stable = new boolean[n];
-        double[][] v = new double[k][n];
-        boolean[] ok = new boolean[k];
-        Arrays.fill(ok, true);
-        for (int i = 0; i < n; i++) {
-            OrbitPoint op = report.points().get(first + i);
-            p[i] = op.parameter();
-            stable[i] = op.stable();
-            double[] z = {op.flux(), op.voltage()};
-            v[0][i] = z[1];
-            EquivalentCircuit c = range.circuit(op.parameter());
-            for (int j = 1; j < k; j++) {
-                if (!ok[j]) {
-                    continue;
-                }
-                try {
-                    z = CircuitOrbits.settledState(c, z[0], z[1], 1, ITERATE_TOLERANCE);
-                    v[j][i] = z[1];
-                } catch (FerromapException e) {
-                    ok[j] = false; // an iterate that cannot be integrated is left out of the chart
-                }
-            }
-        }
-        for (int j = 0; j < k; j++) {
-            if (ok[j]) {
-                curves.add(new OrbitCharts.Curve(b, br.period(), p, v[j], stable));
-            }
+    /** The orbit over its period (section states and peaks), or null when it cannot be integrated (left out of the charts). */
+    private OrbitExtent extent(double parameter, double flux, double voltage, int k) {
+        try {
+            return CircuitOrbits.extent(range.circuit(parameter), flux, voltage, k, EXTENT_TOLERANCE);
+        } catch (FerromapException e) {
+            return null;
         }
     }
 
@@ -266,12 +275,22 @@ final class ContinuedOrbits {
         return foldNote;
     }
 
-    List<OrbitCharts.Curve> curves() {
-        return curves;
+    /** Curves of the voltage on the section t = 0 mod T (k per period-k branch), for the stroboscopic view. */
+    List<OrbitCharts.Curve> sectionCurves() {
+        return sectionCurves;
     }
 
-    List<OrbitCharts.Mark> marks() {
-        return marks;
+    List<OrbitCharts.Mark> sectionMarks() {
+        return sectionMarks;
+    }
+
+    /** Curves of the peak terminal voltage over each orbit. */
+    List<OrbitCharts.Curve> peakCurves() {
+        return peakCurves;
+    }
+
+    List<OrbitCharts.Mark> peakMarks() {
+        return peakMarks;
     }
 
     double start() {
@@ -290,17 +309,18 @@ final class ContinuedOrbits {
                 r.add(has ? p.multipliers().get(j).get(1) : null);
             }
             r.add(p.stable());
+            r.add(p.peakVoltage());
             rows.add(r);
         }
         Csv.write(f.file("orbit-points.csv"), List.of("branch", "period (source periods)", range.name() + u,
                 "flux at t = 0 mod kT (Wb-turn)", "voltage at t = 0 mod kT (V)", "multiplier 1 re", "multiplier 1 im",
-                "multiplier 2 re", "multiplier 2 im", "stable"), rows);
+                "multiplier 2 re", "multiplier 2 im", "stable", "peak voltage over the orbit (V)"), rows);
         List<List<?>> brows = new ArrayList<>();
         for (BifurcationJson b : bifurcations) {
-            brows.add(List.of(b.type(), b.parameter(), b.period(), b.flux(), b.voltage(), b.located(), b.branch()));
+            brows.add(List.of(b.type(), b.parameter(), b.period(), b.flux(), b.voltage(), b.located(), b.branch(), b.peakVoltage()));
         }
         Csv.write(f.file("bifurcations.csv"), List.of("type", range.name() + u, "period (source periods)",
-                "flux at t = 0 mod kT (Wb-turn)", "voltage at t = 0 mod kT (V)", "located", "branch"), brows);
+                "flux at t = 0 mod kT (Wb-turn)", "voltage at t = 0 mod kT (V)", "located", "branch", "peak voltage over the orbit (V)"), brows);
         if (folds != null) {
             List<List<?>> frows = new ArrayList<>();
             for (FoldJson fj : folds) {
@@ -332,8 +352,19 @@ final class ContinuedOrbits {
         if (distinct.isEmpty()) {
             o.println("    none in the range");
         }
+        int longer = 0;
+        java.util.TreeSet<Integer> periods = new java.util.TreeSet<>();
         for (BifurcationJson b : distinct) {
-            o.printf("    %-16s at %s %s, period %d%s%n", b.type(), g(b.parameter(), 7), u, b.period(), b.located() ? "" : " (not located)");
+            if (distinct.size() > 20 && b.period() > 2) {
+                longer++; // a cascade's many high-period events go to the files only
+                periods.add(b.period());
+                continue;
+            }
+            o.printf("    %-16s at %s %s, period %d, peak %s V%s%n", b.type(), g(b.parameter(), 7), u, b.period(),
+                    g(b.peakVoltage(), 4), b.located() ? "" : " (not located)");
+        }
+        if (longer > 0) {
+            o.printf("    and %d more on orbits of period %s (listed in bifurcations.csv)%n", longer, periods);
         }
         if (folds != null && !folds.isEmpty()) {
             o.println("  folds in source voltage, three ways (V peak):");

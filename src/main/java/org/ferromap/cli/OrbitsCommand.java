@@ -22,7 +22,8 @@ import picocli.CommandLine.Option;
     "unstable and ferroresonant period-1 orbits) at --start and at both ends of the range.",
     "By default every period from 1 to 8 is followed.",
     "For --vary source the folds are also compared with the single- and multi-harmonic balance.",
-    "Writes a chart (PNG, SVG, PDF), CSV and JSON under <out>/<study>/orbits."})
+    "Writes charts (PNG, SVG, PDF: the peak voltage of each orbit, and its voltage on the section",
+    "t = 0 mod T as the sweep verb draws it), CSV and JSON under <out>/<study>/orbits."})
 final class OrbitsCommand extends BaseCommand {
 
     /** Default count of initial states: the de-energized terminal and two spread states (a run of seconds to a minute). */
@@ -94,8 +95,10 @@ final class OrbitsCommand extends BaseCommand {
                 units(range));
         Path dir;
         try (OutputFolder f = OutputFolder.open(study.folderFor("orbits"))) {
-            OrbitCharts.diagram("Periodic orbits and their bifurcations", range.words(), range.unit(), orbits.curves(),
-                    orbits.marks(), null, f.staging(), "orbit-branches");
+            OrbitCharts.diagram("Periodic orbits and their bifurcations", range.words(), range.unit(), "peak terminal voltage",
+                    orbits.peakCurves(), orbits.peakMarks(), null, f.staging(), "orbit-branches");
+            OrbitCharts.diagram("Periodic orbits on the section t = 0 mod T", range.words(), range.unit(),
+                    "terminal voltage at t = 0 mod T", orbits.sectionCurves(), orbits.sectionMarks(), null, f.staging(), "orbit-sections");
             orbits.writeCsv(f);
             Json.write(result, f.file("orbits.json"));
             dir = f.commit();

@@ -155,8 +155,8 @@ final class SweepCommand extends BaseCommand {
                 py[i] = report.samples().get(i).voltage();
             }
             OrbitCharts.diagram(withOrbits ? "Bifurcation diagram with the continued orbits" : "Bifurcation diagram (brute force)",
-                    range.words(), range.unit(), orbits == null ? List.of() : orbits.curves(),
-                    orbits == null ? List.of() : orbits.marks(), new OrbitCharts.Cloud(px, py), f.staging(), "bifurcation-diagram");
+                    range.words(), range.unit(), "terminal voltage at t = 0 mod T", orbits == null ? List.of() : orbits.sectionCurves(),
+                    orbits == null ? List.of() : orbits.sectionMarks(), new OrbitCharts.Cloud(px, py), f.staging(), "bifurcation-diagram");
             CircuitSystem sys = CircuitSystem.of(base);
             List<List<?>> sampleRows = new ArrayList<>();
             for (SweepRun r : result) {

@@ -13,10 +13,10 @@ import org.knowm.xchart.style.markers.Marker;
 import org.knowm.xchart.style.markers.SeriesMarkers;
 
 /**
- * Charts of periodic orbits: continued branches (the voltage on the stroboscopic section t = 0 mod
- * kT against the parameter; stable solid, unstable dashed, a colour per period) with the located
- * bifurcations marked by type, and the brute-force bifurcation diagram (stroboscopic samples as
- * small dots) under them when a sweep is given. Values arrive in SI; axes take a decimal prefix
+ * Charts of periodic orbits: continued branches (a voltage of each orbit against the parameter: its
+ * peak, or its values on the stroboscopic section t = 0 mod T; stable solid, unstable dashed, a
+ * colour per period) with the located bifurcations marked by type, and the brute-force bifurcation
+ * diagram (stroboscopic samples as small dots) under them when a sweep is given. Values arrive in SI; axes take a decimal prefix
  * that keeps the numbers readable (kV, uF, km).
  */
 public final class OrbitCharts {
@@ -36,7 +36,7 @@ public final class OrbitCharts {
      * @param branch index of the branch, for the legend grouping
      * @param period the orbits' period, source periods
      * @param parameter parameter per point, SI
-     * @param voltage terminal voltage on the section per point, V
+     * @param voltage the voltage drawn per point (peak, or on the section), V
      * @param stable whether the orbit at each point is stable
      */
     public record Curve(int branch, int period, double[] parameter, double[] voltage, boolean[] stable) {
@@ -58,7 +58,7 @@ public final class OrbitCharts {
      *        is drawn at its parameter)
      * @param type "fold", "period-doubling", "torus" or "pitchfork"
      * @param parameter parameter value, SI
-     * @param voltage terminal voltage on the section at the bifurcating orbit, V
+     * @param voltage the voltage drawn of the bifurcating orbit (as its curves), V
      */
     public record Mark(int branch, String type, double parameter, double voltage) { }
 
@@ -118,13 +118,14 @@ public final class OrbitCharts {
      * @param title chart title
      * @param parameterName words for the parameter, e.g. "source peak voltage"
      * @param parameterUnit its SI unit
+     * @param voltageName words for the voltage drawn, e.g. "peak terminal voltage"
      * @param curves branch curves (may be empty)
      * @param marks bifurcations (may be empty)
      * @param cloud brute-force samples, or null
      * @return the files written
      */
-    public static List<Path> diagram(String title, String parameterName, String parameterUnit, List<Curve> curves, List<Mark> marks,
-            Cloud cloud, Path dir, String name) {
+    public static List<Path> diagram(String title, String parameterName, String parameterUnit, String voltageName, List<Curve> curves,
+            List<Mark> marks, Cloud cloud, Path dir, String name) {
         double xMax = 0;
         double yMax = 0;
         for (Curve c : curves) {
@@ -137,8 +138,7 @@ public final class OrbitCharts {
         }
         Scale xs = Scale.of(parameterUnit, xMax);
         Scale ys = Scale.of("V", yMax);
-        XYChart ch = ChartFiles.xyChart(title, parameterName + axisUnit(xs),
-                "terminal voltage at t = 0 mod kT" + axisUnit(ys));
+        XYChart ch = ChartFiles.xyChart(title, parameterName + axisUnit(xs), voltageName + axisUnit(ys));
         if (cloud != null && cloud.parameter().length > 0) {
             XYSeries s = ch.addSeries("brute force (once a period)", scaled(cloud.parameter(), xs), scaled(cloud.voltage(), ys));
             s.setXYSeriesRenderStyle(XYSeries.XYSeriesRenderStyle.Scatter);

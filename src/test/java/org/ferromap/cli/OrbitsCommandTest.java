@@ -173,6 +173,11 @@ class OrbitsCommandTest {
             if (k == 2) {
                 assertTrue(Math.hypot(once[0] - z[0], once[1] - z[1]) > 1e-3, "least period 2: " + p);
             }
+            // The peak voltage over the orbit, sampled 4000 times a period here: the sampled maximum
+            // of a smooth waveform falls short by about (pi / 4000)^2 / 2 of the peak (3e-7 relative);
+            // 1e-4 relative bounds that and the command's own sampling (16 points per integrator step).
+            double peak = peak(b, z, k);
+            assertEquals(peak, p.get("peakVoltage").asDouble(), 1e-4 * peak, p.toString());
             checked++;
         }
         assertTrue(orbitsOfPeriod(2) > 0, "the doubled branch was followed");
@@ -185,6 +190,33 @@ class OrbitsCommandTest {
             n += p.get("period").asInt() == k ? 1 : 0;
         }
         return n;
+    }
+
+    private static double peak(double sourcePeak, double[] z, int periods) {
+        double[] y = z.clone();
+        double peak = Math.abs(y[1]);
+        int n = 4000 * periods;
+        DormandPrince853Integrator dp = new DormandPrince853Integrator(1e-12, 1.0, 1e-11, 1e-11);
+        for (int i = 0; i < n; i++) {
+            dp.integrate(cubic(sourcePeak), 2 * Math.PI * i / 4000, y, 2 * Math.PI * (i + 1) / 4000, y);
+            peak = Math.max(peak, Math.abs(y[1]));
+        }
+        return peak;
+    }
+
+    private static FirstOrderDifferentialEquations cubic(double sourcePeak) {
+        return new FirstOrderDifferentialEquations() {
+            @Override
+            public int getDimension() {
+                return 2;
+            }
+
+            @Override
+            public void computeDerivatives(double t, double[] y, double[] dy) {
+                dy[0] = y[1];
+                dy[1] = sourcePeak * Math.cos(t) - K * y[1] - y[0] * y[0] * y[0];
+            }
+        };
     }
 
     private static double[] flow(double sourcePeak, double[] z, int periods) {
@@ -235,7 +267,8 @@ class OrbitsCommandTest {
             assertTrue(samples.get(0).get(key).isNumber(), key);
         }
         Path o = tmp.resolve("out/cubic/orbits");
-        for (String f : List.of("orbit-branches.png", "orbit-branches.svg", "orbit-branches.pdf", "orbits.json", "orbit-points.csv",
+        for (String f : List.of("orbit-branches.png", "orbit-branches.svg", "orbit-branches.pdf", "orbit-sections.png",
+                "orbit-sections.svg", "orbit-sections.pdf", "orbits.json", "orbit-points.csv",
                 "bifurcations.csv", "fold-comparison.csv")) {
             assertTrue(Files.exists(o.resolve(f)), f);
         }
