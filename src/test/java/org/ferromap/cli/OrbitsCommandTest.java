@@ -173,8 +173,8 @@ class OrbitsCommandTest {
             if (k == 2) {
                 assertTrue(Math.hypot(once[0] - z[0], once[1] - z[1]) > 1e-3, "least period 2: " + p);
             }
-            // The peak voltage over the orbit, sampled 4000 times a period here: the sampled maximum
-            // of a smooth waveform falls short by about (pi / 4000)^2 / 2 of the peak (3e-7 relative);
+            // The peak voltage over the orbit, sampled 1000 times a period here: the sampled maximum
+            // of a smooth waveform falls short by at most about (pi / 1000)^2 / 2 of the peak (5e-6 relative);
             // 1e-4 relative bounds that and the command's own sampling (16 points per integrator step).
             double peak = peak(b, z, k);
             assertEquals(peak, p.get("peakVoltage").asDouble(), 1e-4 * peak, p.toString());
@@ -195,10 +195,10 @@ class OrbitsCommandTest {
     private static double peak(double sourcePeak, double[] z, int periods) {
         double[] y = z.clone();
         double peak = Math.abs(y[1]);
-        int n = 4000 * periods;
+        int n = 1000 * periods;
         DormandPrince853Integrator dp = new DormandPrince853Integrator(1e-12, 1.0, 1e-11, 1e-11);
         for (int i = 0; i < n; i++) {
-            dp.integrate(cubic(sourcePeak), 2 * Math.PI * i / 4000, y, 2 * Math.PI * (i + 1) / 4000, y);
+            dp.integrate(cubic(sourcePeak), 2 * Math.PI * i / 1000, y, 2 * Math.PI * (i + 1) / 1000, y);
             peak = Math.max(peak, Math.abs(y[1]));
         }
         return peak;
@@ -345,5 +345,50 @@ class OrbitsCommandTest {
             double miss = Math.hypot((y[0] - z[0]) / lb, (y[1] - z[1]) / c.ratedPeak());
             assertTrue(miss < 1e-6, "P(z) - z = " + miss + " per unit at " + p);
         }
+    }
+
+    @Test
+    void foldsComparedThreeWays() throws Exception {
+        // The cubic of DOMAIN.md §9.1 (w = 1, Cs = 1, Cg = 0, i = 0.5 lambda + lambda^3) with a light
+        // loss G = 0.01 S (Rc = 100 ohm), continued in the source in text mode; the JSON is read from the file.
+        Path dir = Files.createDirectories(tmp.resolve("folds"));
+        Path f = dir.resolve("lossy.yaml");
+        Files.writeString(f, Files.readString(cubicStudy(dir, "0.1 V peak")).replace("10 ohm", "100 ohm")
+                .replace("{a: 0, b: 1, n: 3}", "{a: 0.5, b: 1, n: 3}"));
+        var r = CliTestSupport.run("orbits", f.toString(), "--vary", "source", "--from", "0.01 V peak", "--to", "0.3 V peak",
+                "--period", "1", "--initial-states", "1", "--out", dir.resolve("out").toString());
+        assertEquals(0, r.code(), r.err());
+        assertTrue(r.out().contains("folds in source voltage, three ways"), r.out());
+        Path folder = dir.resolve("out/lossy/orbits");
+        JsonNode j = org.ferromap.report.Json.mapper().readTree(folder.resolve("orbits.json").toFile());
+        assertTrue(Files.readAllLines(folder.resolve("fold-comparison.csv")).size() == 3, "header and two folds");
+        // Closed form [der, DOMAIN.md §3]: kappa = w^2 C - a = 0.5, delta = w G = 0.01, m = 2,
+        // beta = k3 b = 0.75; the jump-up fold is the smaller root x of 3 x^2 - 4 kappa x + kappa^2 + delta^2,
+        // Lambda = sqrt(x / beta), E = Lambda sqrt((x - kappa)^2 + delta^2) / (w Cs).
+        double kappa = 0.5;
+        double delta = 0.01;
+        double x = (4 * kappa - Math.sqrt(16 * kappa * kappa - 12 * (kappa * kappa + delta * delta))) / 6;
+        double eUp = Math.sqrt(x / 0.75) * Math.hypot(x - kappa, delta);
+        JsonNode up = j.get("foldComparison").get(0);
+        assertEquals("up", up.get("jump").asText());
+        // 1e-6 relative: the balance locates the tangency far more finely.
+        assertEquals(eUp, up.get("singleHarmonic").asDouble(), 1e-6 * eUp);
+        double exact = up.get("exact").asDouble();
+        double multi = up.get("multiHarmonic").asDouble();
+        // Single harmonic against the exact orbit: "a few percent" for a smooth cubic (DOMAIN.md §3 [der]); 10 % bounds it.
+        assertTrue(Math.abs(eUp - exact) < 0.10 * exact, "single " + eUp + " exact " + exact);
+        // Multi-harmonic balance (Galerkin in frequency) against shooting in time, two independent
+        // methods: both locate to ~1e-10 and nine odd harmonics of a weakly saturated cubic truncate
+        // far below 1e-6 relative.
+        assertEquals(exact, multi, 1e-6 * exact);
+        boolean listed = false;
+        for (JsonNode b : j.get("bifurcations")) {
+            listed |= b.get("type").asText().equals("fold") && Math.abs(b.get("parameter").asDouble() - exact) < 1e-12 * exact;
+        }
+        assertTrue(listed, "the exact fold is one of the bifurcations");
+        // the jump-down fold of the balance (0.008 V) lies below the range: no exact value, and the reason
+        JsonNode down = j.get("foldComparison").get(1);
+        assertTrue(down.get("exact").isNull());
+        assertEquals("outside the range continued", down.get("note").asText());
     }
 }
