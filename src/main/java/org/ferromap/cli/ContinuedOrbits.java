@@ -119,6 +119,7 @@ final class ContinuedOrbits {
             List<Boolean> cs = new ArrayList<>();
             List<Double> cPeak = new ArrayList<>();
             List<double[]> cSection = new ArrayList<>();
+            List<double[]> cMirror = new ArrayList<>();
             for (int i = 0; i < br.size(); i++) {
                 OrbitPoint p = report.points().get(points.size());
                 OrbitExtent e = extent(p.parameter(), p.flux(), p.voltage(), k);
@@ -131,6 +132,7 @@ final class ContinuedOrbits {
                     cs.add(p.stable());
                     cPeak.add(e.peakVoltage());
                     cSection.add(e.voltage());
+                    cMirror.add(e.mirrorVoltage());
                 }
             }
             branchList.add(new BranchJson(b, br.period(), br.section().toString(), br.size(), br.size() == 0 ? null : lo,
@@ -142,12 +144,17 @@ final class ContinuedOrbits {
                     st[i] = cs.get(i);
                 }
                 peakCurves.add(new OrbitCharts.Curve(b, br.period(), px, cPeak.stream().mapToDouble(Double::doubleValue).toArray(), st));
+                // An asymmetric orbit's mirror image is an orbit with the same stability: drawn with it, so
+                // the section chart shows what a sweep from any initial state can meet.
+                boolean mirrored = !br.section().half();
                 for (int j = 0; j < k; j++) {
-                    double[] v = new double[px.length];
-                    for (int i = 0; i < v.length; i++) {
-                        v[i] = cSection.get(i)[j];
+                    for (List<double[]> src : mirrored ? List.of(cSection, cMirror) : List.of(cSection)) {
+                        double[] v = new double[px.length];
+                        for (int i = 0; i < v.length; i++) {
+                            v[i] = src.get(i)[j];
+                        }
+                        sectionCurves.add(new OrbitCharts.Curve(b, br.period(), px, v, st));
                     }
-                    sectionCurves.add(new OrbitCharts.Curve(b, br.period(), px, v, st));
                 }
             }
             for (LocatedBifurcation at : br.bifurcations()) {
@@ -160,6 +167,9 @@ final class ContinuedOrbits {
                 sectionMarks.add(new OrbitCharts.Mark(b, r.type(), r.parameter(), voltage));
                 if (e != null) {
                     peakMarks.add(new OrbitCharts.Mark(b, r.type(), r.parameter(), peak));
+                    if (!at.section().half()) {
+                        sectionMarks.add(new OrbitCharts.Mark(b, r.type(), r.parameter(), e.mirrorVoltage()[0]));
+                    }
                 }
             }
         }

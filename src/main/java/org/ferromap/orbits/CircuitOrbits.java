@@ -93,7 +93,8 @@ public final class CircuitOrbits {
     private static final int PEAK_SAMPLES_PER_STEP = 16;
 
     /**
-     * Follows an orbit over its period: its states at t = jT and its peak flux and voltage. The
+     * Follows an orbit over its period: its states at t = jT, those of its mirror image, and its
+     * peak flux and voltage. The
      * peaks come from the dense output of the integrator sampled 16 times a step (the steps are a
      * small fraction of the period, so the sampled maximum is within a small fraction of a percent
      * of the true one, well below what a chart shows).
@@ -103,7 +104,7 @@ public final class CircuitOrbits {
      * @param voltage terminal voltage on the section at t = 0, V
      * @param periods the orbit's period k, source periods, 1 to 64
      * @param tolerance integration tolerance (relative, and absolute in per unit)
-     * @return the k section states and the peaks
+     * @return the k section states (and the mirror image's) and the peaks
      * @throws FerromapException INTEGRATION_FAILED when the integration fails
      */
     public static OrbitExtent extent(EquivalentCircuit circuit, double flux, double voltage, int periods, double tolerance) {
@@ -125,17 +126,26 @@ public final class CircuitOrbits {
                 peak[1] = Math.max(peak[1], Math.abs(tmp[1]));
             }
         };
+        double[] mfx = new double[periods];
+        double[] mvx = new double[periods];
+        double half = 0.5 * PerUnitCircuit.PERIOD;
         for (int j = 0; j < periods; j++) {
             fx[j] = sys.flux(z[0]);
             vx[j] = sys.voltage(z[1]);
-            DormandPrince853.Status s = dp.integrate(rhs, j * PerUnitCircuit.PERIOD, z, (j + 1) * PerUnitCircuit.PERIOD, 100_000,
-                    listener);
-            if (s != DormandPrince853.Status.OK) {
-                throw new FerromapException(MessageKey.INTEGRATION_FAILED, "following the orbit over period " + (j + 1)
-                        + " failed: " + s.explanation());
+            for (int h = 0; h < 2; h++) {
+                double t0 = j * PerUnitCircuit.PERIOD + h * half;
+                DormandPrince853.Status s = dp.integrate(rhs, t0, z, t0 + half, 100_000, listener);
+                if (s != DormandPrince853.Status.OK) {
+                    throw new FerromapException(MessageKey.INTEGRATION_FAILED, "following the orbit over period " + (j + 1)
+                            + " failed: " + s.explanation());
+                }
+                if (h == 0) {
+                    mfx[j] = -sys.flux(z[0]);
+                    mvx[j] = -sys.voltage(z[1]);
+                }
             }
         }
-        return new OrbitExtent(fx, vx, sys.flux(peak[0]), sys.voltage(peak[1]));
+        return new OrbitExtent(fx, vx, mfx, mvx, sys.flux(peak[0]), sys.voltage(peak[1]));
     }
 
     /**
@@ -340,6 +350,9 @@ public final class CircuitOrbits {
 
         /** Keeps a branch and remembers its end points (where later seeds at the window's ends meet it). */
         private void add(OrbitBranch b) {
+            if (b.size() == 1 && b.stopReason().equals("WINDOW_LEFT")) {
+                return; // started on the window's edge going out: its one point is the start of the other way
+            }
             branches.add(b);
             if (b.size() > 0) {
                 for (int i : new int[] {0, b.size() - 1}) {
