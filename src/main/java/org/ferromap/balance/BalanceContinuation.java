@@ -1,0 +1,232 @@
+package org.ferromap.balance;
+
+import java.util.ArrayList;
+import java.util.List;
+import java.util.function.DoubleFunction;
+import org.ferromap.circuit.EquivalentCircuit;
+import org.ferromap.continuation.Branch;
+import org.ferromap.continuation.BranchTracer;
+import org.ferromap.continuation.ContinuationProblem;
+import org.ferromap.continuation.ContinuationSettings;
+import org.ferromap.continuation.Direction;
+import org.ferromap.continuation.FoldCurve;
+import org.ferromap.continuation.FoldCurveSettings;
+import org.ferromap.continuation.FoldCurveTracer;
+import org.ferromap.continuation.SpecialPoint;
+import org.ferromap.continuation.StabilityCriterion;
+import org.ferromap.errors.FerromapException;
+import org.ferromap.errors.MessageKey;
+
+/**
+ * The LC balance followed by pseudo-arclength continuation in any circuit parameter
+ * ({@link BalanceAxis}): branches with their stability, folds and branch points, and fold curves
+ * in a plane of two parameters with their cusps and the regions they bound.
+ *
+ * <p>The residual is the per-unit balance of {@link LoopResidual} with bases taken at the start
+ * circuit, so studies in kV, uF and MOhm need no hand scaling. A branch starts at the requested
+ * value (normally the study's own, clamped into the range) on a steady state of the
+ * single-harmonic balance ({@link SingleHarmonicBalance#operatingPoints}): the normal one or the
+ * upper one; for H &gt; 1 that point is first solved by {@link MultiHarmonicBalance#solve}. It is
+ * then continued both ways to the ends of the range. Stability is the slow-flow criterion for
+ * H = 1 and Hill's method for H &gt; 1.
+ *
+ * <p>Fold curves start from the folds of the single-harmonic branch in P1 at the study's P2
+ * (or, when that branch has none, at the first of a few P2 values across the window that has),
+ * are traced through cusps to the window's edges, and every fold not yet on a traced curve starts
+ * another. The regions between the curves are labelled by the single-harmonic steady states at a
+ * probe point inside each.
+ *
+ * <p>Immutable and thread-safe: every call builds its own residuals and work space.
+ */
+public final class BalanceContinuation {
+
+    /**
+     * Engine settings used by default: the engine's defaults with a first step of 0.005 and a
+     * largest step of 0.05 in scaled arclength (at least twenty points across the range, enough
+     * for a smooth chart) and up to 4000 steps per run.
+     */
+    public static final ContinuationSettings DEFAULT_ENGINE = ContinuationSettings.DEFAULTS
+            .withSteps(0.005, 1e-9, 0.05).withMaxSteps(4000);
+
+    /** Largest harmonic order accepted: beyond it the Hill matrices and AFT grids grow large for no gain in the balance. */
+    public static final int MAX_HARMONICS = 49;
+
+    private final ContinuationSettings engine;
+    private final SingleHarmonicBalance single;
+
+    public BalanceContinuation() {
+        this(DEFAULT_ENGINE);
+    }
+
+    /**
+     * @param engine engine settings; their window is replaced by each request's range
+     */
+    public BalanceContinuation(ContinuationSettings engine) {
+        if (engine == null) {
+            throw new FerromapException(MessageKey.BAD_REQUEST, "engine settings must be given");
+        }
+        this.engine = engine;
+        this.single = new SingleHarmonicBalance();
+    }
+
+    public ContinuationSettings engine() {
+        return engine;
+    }
+
+    /** Checks a harmonic order: 1 to {@link #MAX_HARMONICS}. */
+    public static void checkHarmonics(int harmonics) {
+        if (harmonics < 1 || harmonics > MAX_HARMONICS) {
+            throw new FerromapException(MessageKey.BAD_REQUEST, "harmonics H = " + harmonics
+                    + " is not allowed; expected 1 (single-harmonic) to " + MAX_HARMONICS);
+        }
+    }
+
+    /**
+     * Traces the balance branch in one parameter across [from, to].
+     *
+     * @param axis the parameter
+     * @param family the circuit at a value of the parameter (SI, the axis's unit)
+     * @param from one end of the range, axis unit
+     * @param to the other end, axis unit
+     * @param start value to start from (the study's own), clamped into the range
+     * @param harmonics H, 1 for the single-harmonic balance
+     * @param state which steady state to start on
+     * @throws FerromapException BAD_REQUEST for a range or H that cannot be honoured;
+     *     NO_CONVERGENCE when the start point cannot be put on the branch
+     */
+    public BranchResult branch(BalanceAxis axis, DoubleFunction<EquivalentCircuit> family, double from, double to,
+                               double start, int harmonics, StartState state) {
+        if (axis == null || family == null || state == null) {
+            throw new FerromapException(MessageKey.BAD_REQUEST, "axis, circuit family and start state must be given");
+        }
+        checkHarmonics(harmonics);
+        double lo = Math.min(from, to);
+        double hi = Math.max(from, to);
+        axis.checkRange(lo, hi);
+        double p0 = clamp(start, lo, hi);
+        CircuitPlane plane = CircuitPlane.of(family);
+        EquivalentCircuit c0 = plane.at(p0, Double.NaN);
+        OperatingPoint seed = pick(single.operatingPoints(c0), state);
+
+        LoopResidual res;
+        double[] x0;
+        StabilityCriterion criterion;
+        if (harmonics == 1) {
+            res = new LoopResidual(plane, c0, axis, hi - lo, null, 0, 1, 0);
+            x0 = res.seed(seed, c0);
+            criterion = SlowFlowStability.INSTANCE;
+        } else {
+            HarmonicSettings hs = HarmonicSettings.DEFAULTS.withHarmonics(harmonics);
+            MultiHarmonicBalance mhb = new MultiHarmonicBalance(c0, hs);
+            x0 = mhb.seed(seed);
+            int samples = mhb.basis().samples();
+            try {
+                PeriodicSolution s = mhb.solve(x0);
+                x0 = s.perUnit();
+                samples = s.samples();
+            } catch (FerromapException e) {
+                if (e.key() != MessageKey.NO_CONVERGENCE) {
+                    throw e;
+                }
+                // Leave the single-harmonic seed: the engine corrects its start with p held.
+            }
+            res = new LoopResidual(plane, c0, axis, hi - lo, null, 0, harmonics, samples);
+            criterion = new HillCriterion(res, Double.NaN, hs.withSamples(samples));
+        }
+        BranchTracer tracer = new BranchTracer(engine.withWindow(lo, hi), criterion);
+        ContinuationProblem problem = res.atQ(Double.NaN);
+        Branch up = tracer.trace(problem, x0, p0, Direction.INCREASING);
+        Branch down = tracer.trace(problem, x0, p0, Direction.DECREASING);
+        if (up.size() == 0 && down.size() == 0) {
+            throw new FerromapException(MessageKey.NO_CONVERGENCE, "the " + axis.name() + " branch could not start at "
+                    + p0 + " " + axis.unit() + ": " + up.stopDetail());
+        }
+
+        // Join: the decreasing run reversed (without its start point when the other run has it), then the increasing run.
+        List<double[]> xs = new ArrayList<>();
+        List<Double> ps = new ArrayList<>();
+        List<Integer> unstable = new ArrayList<>();
+        int m = down.size();
+        int firstDown = up.size() > 0 ? 1 : 0;
+        for (int i = m - 1; i >= firstDown; i--) {
+            xs.add(down.x()[i]);
+            ps.add(down.p(i));
+            unstable.add(down.unstableCount(i));
+        }
+        int offset = xs.size();
+        for (int i = 0; i < up.size(); i++) {
+            xs.add(up.x()[i]);
+            ps.add(up.p(i));
+            unstable.add(up.unstableCount(i));
+        }
+        List<BranchResult.Point> points = new ArrayList<>(xs.size());
+        for (int k = 0; k < xs.size(); k++) {
+            double[] x = xs.get(k);
+            double p = ps.get(k);
+            int u = unstable.get(k);
+            points.add(new BranchResult.Point(p, res.fundamental(x) * res.baseFlux, voltage(res, x, p),
+                    res.peakFlux(x) * res.baseFlux, u == 0, u));
+        }
+        List<BranchResult.Special> folds = new ArrayList<>();
+        List<BranchResult.Special> branchPoints = new ArrayList<>();
+        // The decreasing run's specials, last met first, with the index of the point before each in joined order.
+        List<SpecialPoint> downSpecials = new ArrayList<>(down.specialPoints());
+        java.util.Collections.reverse(downSpecials);
+        for (SpecialPoint sp : downSpecials) {
+            // Between down points a and a + 1, i.e. joined points m - 1 - a and m - 2 - a.
+            add(sp, m - 2 - sp.afterIndex(), res, folds, branchPoints);
+        }
+        for (SpecialPoint sp : up.specialPoints()) {
+            add(sp, offset + sp.afterIndex(), res, folds, branchPoints);
+        }
+        double startFlux = res.fundamental(x0) * res.baseFlux;
+        if (up.size() > 0) {
+            startFlux = res.fundamental(up.x()[0]) * res.baseFlux;
+        }
+        return new BranchResult(axis.name(), axis.unit(), harmonics, harmonics == 1 ? "slow flow" : "Hill",
+                lo, hi, start, p0, state, startFlux, points, folds, branchPoints,
+                up.stopReason(), up.stopDetail(), down.stopReason(), down.stopDetail(),
+                up.rejectedSteps().size() + down.rejectedSteps().size());
+    }
+
+    private void add(SpecialPoint sp, int after, LoopResidual res, List<BranchResult.Special> folds, List<BranchResult.Special> bps) {
+        double[] x = sp.x();
+        BranchResult.Special s = new BranchResult.Special(sp.p(), res.fundamental(x) * res.baseFlux, voltage(res, x, sp.p()),
+                after, sp.located());
+        if (sp.kind() == SpecialPoint.Kind.FOLD) {
+            folds.add(s);
+        } else if (sp.kind() == SpecialPoint.Kind.BRANCH_POINT) {
+            bps.add(s);
+        }
+    }
+
+    /** Peak magnetizing voltage, V: Lambda_b w max|dy/dtau|. */
+    private static double voltage(LoopResidual res, double[] x, double p) {
+        EquivalentCircuit c = res.circuit(p, Double.NaN);
+        double w = c == null ? res.baseOmega : c.omega();
+        return res.peakRate(x) * res.baseFlux * w;
+    }
+
+    private static double clamp(double v, double lo, double hi) {
+        if (Double.isNaN(v)) {
+            return lo;
+        }
+        return Math.max(lo, Math.min(hi, v));
+    }
+
+    /** The normal (lowest-flux stable) or upper (highest-flux stable) point; any point when none is stable. */
+    private static OperatingPoint pick(List<OperatingPoint> ops, StartState state) {
+        if (ops.isEmpty()) {
+            throw new FerromapException(MessageKey.NO_CONVERGENCE, "the single-harmonic balance has no steady state at the start");
+        }
+        OperatingPoint best = null;
+        for (OperatingPoint op : ops) {
+            if (op.stable() && !op.atFold()) {
+                if (best == null || (state == StartState.UPPER ? op.flux() > best.flux() : op.flux() < best.flux())) {
+                    best = op;
+                }
+            }
+        }
+        return best != null ? best : (state == StartState.UPPER ? ops.get(ops.size() - 1) : ops.get(0));
+    }
+}
