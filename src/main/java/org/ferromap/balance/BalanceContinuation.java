@@ -147,15 +147,17 @@ public final class BalanceContinuation {
         List<Double> ps = new ArrayList<>();
         List<Integer> unstable = new ArrayList<>();
         int m = down.size();
+        double[][] downX = down.x();
+        double[][] upX = up.x();
         int firstDown = up.size() > 0 ? 1 : 0;
         for (int i = m - 1; i >= firstDown; i--) {
-            xs.add(down.x()[i]);
+            xs.add(downX[i]);
             ps.add(down.p(i));
             unstable.add(down.unstableCount(i));
         }
         int offset = xs.size();
         for (int i = 0; i < up.size(); i++) {
-            xs.add(up.x()[i]);
+            xs.add(upX[i]);
             ps.add(up.p(i));
             unstable.add(up.unstableCount(i));
         }
@@ -181,12 +183,212 @@ public final class BalanceContinuation {
         }
         double startFlux = res.fundamental(x0) * res.baseFlux;
         if (up.size() > 0) {
-            startFlux = res.fundamental(up.x()[0]) * res.baseFlux;
+            startFlux = res.fundamental(upX[0]) * res.baseFlux;
         }
         return new BranchResult(axis.name(), axis.unit(), harmonics, harmonics == 1 ? "slow flow" : "Hill",
                 lo, hi, start, p0, state, startFlux, points, folds, branchPoints,
                 up.stopReason(), up.stopDetail(), down.stopReason(), down.stopDetail(),
                 up.rejectedSteps().size() + down.rejectedSteps().size());
+    }
+
+    /**
+     * Traces the fold curves of the single-harmonic balance in the plane (P1, P2) over the window
+     * [p1From, p1To] x [p2From, p2To], with their cusps, and labels the regions between them.
+     *
+     * @param p1 the parameter the folds are in
+     * @param p2 the second parameter
+     * @param plane the circuit at (P1, P2) values, SI in the axes' units
+     * @param p1Start P1 value the fold-finding branch starts from (the study's own), clamped
+     * @param p2Start P2 value at which folds are first looked for (the study's own), clamped
+     * @throws FerromapException BAD_REQUEST for ranges that cannot be honoured or the same
+     *     parameter twice
+     */
+    public FoldCurveResult foldCurves(BalanceAxis p1, BalanceAxis p2, CircuitPlane plane, double p1From, double p1To,
+                                      double p2From, double p2To, double p1Start, double p2Start) {
+        if (p1 == null || p2 == null || plane == null) {
+            throw new FerromapException(MessageKey.BAD_REQUEST, "both axes and the circuit plane must be given");
+        }
+        if (p1.name().equals(p2.name())) {
+            throw new FerromapException(MessageKey.BAD_REQUEST, "a fold curve needs two different parameters; got "
+                    + p1.name() + " twice");
+        }
+        double lo1 = Math.min(p1From, p1To);
+        double hi1 = Math.max(p1From, p1To);
+        double lo2 = Math.min(p2From, p2To);
+        double hi2 = Math.max(p2From, p2To);
+        p1.checkRange(lo1, hi1);
+        p2.checkRange(lo2, hi2);
+        double s1 = clamp(p1Start, lo1, hi1);
+        double q0 = clamp(p2Start, lo2, hi2);
+
+        // Folds on the P1 branch: at the study's P2 first, then across the P2 window.
+        List<SpecialPoint> starts = List.of();
+        double qStart = q0;
+        LoopResidual res = null;
+        for (double q : candidates(q0, lo2, hi2)) {
+            EquivalentCircuit c = plane.at(s1, q);
+            LoopResidual r = new LoopResidual(plane, c, p1, hi1 - lo1, p2, hi2 - lo2, 1, 0);
+            List<SpecialPoint> found = foldsAt(r, c, s1, q, lo1, hi1);
+            if (!found.isEmpty() || res == null) {
+                res = r;
+                starts = found;
+                qStart = q;
+            }
+            if (!found.isEmpty()) {
+                break;
+            }
+        }
+
+        FoldCurveSettings fs = FoldCurveSettings.DEFAULTS.withContinuation(engine.withWindow(lo1, hi1)).withQWindow(lo2, hi2);
+        FoldCurveTracer tracer = new FoldCurveTracer(fs);
+        List<FoldCurveResult.CurvePoint> curve = new ArrayList<>();
+        List<FoldCurveResult.Cusp> cusps = new ArrayList<>();
+        List<FoldCurveResult.Segment> segments = new ArrayList<>();
+        List<double[][]> polylines = new ArrayList<>();
+        List<FoldCurve> traced = new ArrayList<>();
+        for (SpecialPoint start : starts) {
+            double startFlux = res.fundamental(start.x()) * res.baseFlux;
+            if (onTraced(traced, res, start.p(), qStart, startFlux, hi1 - lo1)) {
+                continue;
+            }
+            FoldCurve fc = tracer.trace(res, start.x(), start.p(), qStart);
+            traced.add(fc);
+            int segment = segments.size();
+            segments.add(new FoldCurveResult.Segment(start.p(), qStart, startFlux, fc.size(), fc.increasingStop(),
+                    fc.increasingDetail(), fc.decreasingStop(), fc.decreasingDetail(), fc.rejectedSteps().size()));
+            double[][] line = new double[fc.size()][];
+            double[][] fx = fc.x();
+            for (int k = 0; k < fc.size(); k++) {
+                curve.add(new FoldCurveResult.CurvePoint(fc.p(k), fc.q(k), res.fundamental(fx[k]) * res.baseFlux, segment));
+                line[k] = new double[] {(fc.p(k) - lo1) / (hi1 - lo1), (fc.q(k) - lo2) / (hi2 - lo2)};
+            }
+            polylines.add(line);
+            for (SpecialPoint cusp : fc.cusps()) {
+                cusps.add(new FoldCurveResult.Cusp(cusp.p(), cusp.q(), res.fundamental(cusp.x()) * res.baseFlux, segment,
+                        cusp.located()));
+            }
+        }
+
+        List<FoldCurveResult.Region> regions = new ArrayList<>();
+        for (PlaneRegions.Raw raw : PlaneRegions.find(polylines)) {
+            double a = lo1 + raw.u() * (hi1 - lo1);
+            double b = lo2 + raw.v() * (hi2 - lo2);
+            int[] probe = classify(plane, a, b);
+            String label = label(probe);
+            if (!FoldCurveResult.BISTABLE.equals(label)) {
+                // A one-state region may wrap round a cusp, its state going continuously from
+                // normal to ferroresonant: call it ferroresonant-only only if every sample agrees.
+                for (double[] uv : raw.samples()) {
+                    String other = label(classify(plane, lo1 + uv[0] * (hi1 - lo1), lo2 + uv[1] * (hi2 - lo2)));
+                    if (!other.equals(label) && !FoldCurveResult.BISTABLE.equals(other)) {
+                        label = FoldCurveResult.ONE_STATE;
+                    }
+                }
+            }
+            regions.add(new FoldCurveResult.Region(label, a, b, probe[0], raw.share()));
+        }
+        return new FoldCurveResult(p1.name(), p1.unit(), p2.name(), p2.unit(), lo1, hi1, lo2, hi2, s1, qStart,
+                curve, cusps, segments, regions);
+    }
+
+    /** {stable states, 1 if the single stable state is ferroresonant} at (a, b); {-1, 0} where the circuit is refused. */
+    private int[] classify(CircuitPlane plane, double a, double b) {
+        EquivalentCircuit c;
+        try {
+            c = plane.at(a, b);
+        } catch (FerromapException e) {
+            return new int[] {-1, 0};
+        }
+        int stable = 0;
+        boolean ferro = false;
+        for (OperatingPoint op : single.operatingPoints(c)) {
+            if (op.stable() && !op.atFold()) {
+                stable++;
+                ferro = op.kind() == PointKind.FERRORESONANT;
+            }
+        }
+        return new int[] {stable, ferro ? 1 : 0};
+    }
+
+    private static String label(int[] probe) {
+        if (probe[0] >= 2) {
+            return FoldCurveResult.BISTABLE;
+        }
+        return probe[0] == 1 && probe[1] == 1 ? FoldCurveResult.FERRORESONANT_ONLY : FoldCurveResult.ONE_STATE;
+    }
+
+    /** P2 values to look for folds at: the start, then nine across the window (geometric when it spans a decade), nearest first. */
+    private static List<Double> candidates(double q0, double lo, double hi) {
+        List<Double> out = new ArrayList<>();
+        out.add(q0);
+        boolean geometric = lo > 0 && hi / lo >= 10;
+        List<Double> across = new ArrayList<>();
+        for (int k = 0; k <= 8; k++) {
+            double t = k / 8.0;
+            across.add(geometric ? lo * Math.pow(hi / lo, t) : lo + t * (hi - lo));
+        }
+        across.sort((x, y) -> Double.compare(Math.abs(x - q0), Math.abs(y - q0)));
+        for (double q : across) {
+            if (q != q0) {
+                out.add(q);
+            }
+        }
+        return out;
+    }
+
+    /** The folds of the single-harmonic P1 branch at q, from its normal and (when distinct) upper state, in P1 order. */
+    private List<SpecialPoint> foldsAt(LoopResidual r, EquivalentCircuit c, double p0, double q, double lo, double hi) {
+        List<OperatingPoint> ops = single.operatingPoints(c);
+        OperatingPoint normal = pick(ops, StartState.NORMAL);
+        OperatingPoint upper = pick(ops, StartState.UPPER);
+        List<OperatingPoint> seeds = new ArrayList<>(List.of(normal));
+        if (upper.flux() > normal.flux() * (1 + 1e-6)) {
+            seeds.add(upper);
+        }
+        BranchTracer tracer = new BranchTracer(engine.withWindow(lo, hi), StabilityCriterion.none());
+        ContinuationProblem problem = r.atQ(q);
+        List<SpecialPoint> out = new ArrayList<>();
+        for (OperatingPoint seed : seeds) {
+            double[] x0 = r.seed(seed, c);
+            for (Direction d : Direction.values()) {
+                for (SpecialPoint sp : tracer.trace(problem, x0, p0, d).specialPoints(SpecialPoint.Kind.FOLD)) {
+                    boolean known = false;
+                    double flux = r.fundamental(sp.x());
+                    for (SpecialPoint o : out) {
+                        known |= Math.abs(o.p() - sp.p()) <= 1e-6 * (hi - lo)
+                                && Math.abs(r.fundamental(o.x()) - flux) <= 1e-6 * Math.max(1, flux);
+                    }
+                    if (!known) {
+                        out.add(sp);
+                    }
+                }
+            }
+        }
+        out.sort((a, b) -> Double.compare(a.p(), b.p()));
+        return out;
+    }
+
+    /** Whether a fold (p, q, flux) lies on one of the curves already traced (within 1e-4 of the window and of the flux). */
+    private static boolean onTraced(List<FoldCurve> traced, LoopResidual r, double p, double q, double flux, double width) {
+        for (FoldCurve fc : traced) {
+            double[][] fx = fc.x();
+            for (int k = 0; k + 1 < fc.size(); k++) {
+                double qa = fc.q(k);
+                double qb = fc.q(k + 1);
+                if ((qa - q) * (qb - q) > 0 || qa == qb) {
+                    continue;
+                }
+                double t = (q - qa) / (qb - qa);
+                double pk = fc.p(k) + t * (fc.p(k + 1) - fc.p(k));
+                double fa = r.fundamental(fx[k]) * r.baseFlux;
+                double fb = r.fundamental(fx[k + 1]) * r.baseFlux;
+                double fk = fa + t * (fb - fa);
+                if (Math.abs(pk - p) <= 1e-4 * width && Math.abs(fk - flux) <= 1e-4 * Math.max(Math.abs(flux), Math.abs(fk))) {
+                    return true;
+                }
+            }
+        }
+        return false;
     }
 
     private void add(SpecialPoint sp, int after, LoopResidual res, List<BranchResult.Special> folds, List<BranchResult.Special> bps) {

@@ -17,10 +17,14 @@ final class PlaneRegions {
     static final int GRID = 160;
     /** Smallest region kept, as a share of the square. */
     static final double MIN_SHARE = 0.002;
-    /** Extra cells per region whose states are also checked for a mixed one-state region. */
-    static final int EXTRA_PROBES = 12;
+    /**
+     * Spacing, in cells, of the lattice of extra sample cells checked for a mixed one-state region
+     * (10 by 10 inside, and every 8 cells along the window's edges, where a region wrapping round a
+     * cusp shows its other kind of state).
+     */
+    static final int SAMPLE_SPACING = 16;
 
-    /** A region in raster terms: its probe point and a few more sample points, unit-square coordinates. */
+    /** A region in raster terms: its probe point and sample points on a coarse lattice and the edges, unit-square coordinates. */
     record Raw(double u, double v, double share, double[][] samples) { }
 
     private PlaneRegions() {
@@ -77,17 +81,37 @@ final class PlaneRegions {
             }
             double share = (double) tail / (g * g);
             if (share >= MIN_SHARE) {
-                int extra = Math.min(EXTRA_PROBES, tail);
-                double[][] samples = new double[extra][];
-                for (int e = 0; e < extra; e++) {
-                    int c = queue[(int) ((e + 0.5) * tail / extra)];
-                    samples[e] = new double[] {(c / g + 0.5) / g, (c % g + 0.5) / g};
+                List<double[]> samples = new ArrayList<>();
+                for (int e = 0; e < tail; e++) {
+                    int c = queue[e];
+                    int h = SAMPLE_SPACING / 2;
+                    int i = c / g;
+                    int j = c % g;
+                    boolean lattice = i % SAMPLE_SPACING == h && j % SAMPLE_SPACING == h;
+                    boolean edge = (i == 0 || i == g - 1 || j == 0 || j == g - 1) && (i + j) % h == 0;
+                    if ((lattice || edge) && !nearWall(wall, i, j)) {
+                        samples.add(new double[] {(c / g + 0.5) / g, (c % g + 0.5) / g});
+                    }
                 }
-                out.add(new Raw((best / g + 0.5) / g, (best % g + 0.5) / g, share, samples));
+                out.add(new Raw((best / g + 0.5) / g, (best % g + 0.5) / g, share, samples.toArray(new double[0][])));
             }
             next++;
         }
         return out;
+    }
+
+    private static boolean nearWall(boolean[] wall, int i, int j) {
+        int g = GRID;
+        for (int di = -1; di <= 1; di++) {
+            for (int dj = -1; dj <= 1; dj++) {
+                int a = i + di;
+                int b = j + dj;
+                if (a >= 0 && a < g && b >= 0 && b < g && wall[a * g + b]) {
+                    return true;
+                }
+            }
+        }
+        return false;
     }
 
     private static int visit(int c, int id, boolean[] wall, int[] region, int[] queue, int tail) {

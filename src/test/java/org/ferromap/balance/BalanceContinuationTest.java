@@ -7,6 +7,7 @@ import java.util.List;
 import org.ferromap.circuit.EquivalentCircuit;
 import org.ferromap.continuation.StopReason;
 import org.ferromap.equipment.PolynomialCurve;
+import org.junit.jupiter.api.Test;
 import org.junit.jupiter.params.ParameterizedTest;
 import org.junit.jupiter.params.provider.CsvSource;
 
@@ -53,5 +54,163 @@ class BalanceContinuationTest {
             assertEquals(ref[0], folds.get(0).parameter(), 1e-8 * ref[0]);
             assertEquals(ref[1], folds.get(0).flux(), 1e-8 * ref[1]);
         }
+    }
+
+    /**
+     * Duffing single-harmonic balance, DOMAIN.md §9.2 [der; response equation as in Nayfeh and
+     * Mook]: x'' + 0.1 x' + x + x^3 = F cos(w t) is the circuit C = Cs = 1 F, Cg = 0, G = 0.1 S
+     * (R = 10 ohm), a = b = 1, n = 3, at w = 1.5 rad/s, with F = w Cs E. Folds at amplitude
+     * 1.286287 (F = 0.193298) and 0.753451 (F = 0.631220). Tolerance half a unit of the last
+     * digit given.
+     */
+    @Test
+    void duffingFoldsThroughTheSourceAxis() {
+        double w = 1.5;
+        EquivalentCircuit c = SingleHarmonicBalanceTest.circuit(w, 0.1, 1, 0, 10.0, new PolynomialCurve(1, 1, 3));
+        BranchResult b = CONTINUATION.branch(SOURCE, c::withSourcePeak, 0.01, 0.6, 0.1, 1, StartState.NORMAL);
+        assertEquals(2, b.folds().size(), "folds " + b.folds());
+        BranchResult.Special up = b.folds().get(0);
+        BranchResult.Special down = b.folds().get(1);
+        assertEquals(0.753451, up.flux(), 5e-7);
+        assertEquals(0.631220, w * up.parameter(), 5e-7);
+        assertEquals(1.286287, down.flux(), 5e-7);
+        assertEquals(0.193298, w * down.parameter(), 5e-7);
+        // Stability changes at the folds [der, slow flow]: stable, saddle between the folds, stable.
+        for (BranchResult.Point p : b.points()) {
+            boolean between = p.flux() > up.flux() * (1 + 1e-6) && p.flux() < down.flux() * (1 - 1e-6);
+            boolean outside = p.flux() < up.flux() * (1 - 1e-6) || p.flux() > down.flux() * (1 + 1e-6);
+            if (between) {
+                assertEquals(1, p.unstableDirections(), "saddle at flux " + p.flux());
+            } else if (outside) {
+                assertEquals(0, p.unstableDirections(), "stable at flux " + p.flux());
+            }
+        }
+    }
+
+    /**
+     * The Duffing cusp of DOMAIN.md §9.2 [der]: w = 1.0903455, amplitude 0.409719,
+     * F = 0.0515845, found by the fold curve in the (source, frequency) plane of the same
+     * circuit (frequency in Hz = w / 2 pi, F = w E). Half a unit of the last digit given.
+     */
+    @Test
+    void duffingCuspInTheSourceFrequencyPlane() {
+        EquivalentCircuit c = SingleHarmonicBalanceTest.circuit(1.5, 0.1, 1, 0, 10.0, new PolynomialCurve(1, 1, 3));
+        double twoPi = 2 * Math.PI;
+        FoldCurveResult r = CONTINUATION.foldCurves(SOURCE, BalanceAxis.frequency(),
+                (e, f) -> c.withSourcePeak(e).withOmega(twoPi * f), 0.001, 0.6, 0.5 / twoPi, 1.5 / twoPi, 0.1, 1.5 / twoPi);
+        assertEquals(1, r.cusps().size(), "cusps " + r.cusps());
+        FoldCurveResult.Cusp cusp = r.cusps().get(0);
+        double wc = twoPi * cusp.p2();
+        assertEquals(1.0903455, wc, 5e-8);
+        assertEquals(0.409719, cusp.flux(), 5e-7);
+        assertEquals(0.0515845, wc * cusp.p1(), 5e-8);
+    }
+
+    /**
+     * The cusp condition kappa = (2 sqrt(n)/(n-1)) delta (DOMAIN.md §3 [der]) reproduced by the
+     * fold curve in the (source, series-capacitance) plane with Cg = 0: the cusp's capacitance
+     * is C_min = (a + (2 sqrt(n)/(n-1)) w G)/w^2, and in the (source, core-loss-resistance)
+     * plane its resistance is 1/G_min, G_min = (w^2 C - a)(n-1)/(2 sqrt(n) w). 1e-6 relative:
+     * the cusp is located to 1e-10 in scaled arclength and the second parameter is stationary
+     * there, so the error is set by the 1e-8 difference error of the cusp coefficient.
+     */
+    @ParameterizedTest
+    @CsvSource({"3", "9", "11"})
+    void cuspConditionFromTheFoldCurve(int n) {
+        EquivalentCircuit base = siCircuit(n, true);
+        PolynomialCurve pc = (PolynomialCurve) base.magnetizing();
+        double w = base.omega();
+        double coefficient = 2 * Math.sqrt(n) / (n - 1);
+        // (source, series capacitance), no shunt capacitance.
+        EquivalentCircuit c = base.withShuntCapacitance(0);
+        double cMin = (pc.a() + coefficient * w * c.conductance()) / (w * w);
+        double eTop = 3 * SingleHarmonicBalanceTest.closedFormFolds(c, pc)[0];
+        FoldCurveResult r = CONTINUATION.foldCurves(SOURCE, BalanceAxis.of(CircuitParameter.SERIES_CAPACITANCE),
+                (e, cs) -> c.withSourcePeak(e).withSeriesCapacitance(cs), 0, eTop, 0.5 * cMin, c.seriesCapacitance(),
+                c.sourcePeak(), c.seriesCapacitance());
+        System.out.println("n=" + n + " Cs plane: cusps " + r.cusps() + " segments " + r.segments() + " regions " + r.regions());
+        assertEquals(1, r.cusps().size(), "cusps " + r.cusps());
+        assertEquals(cMin, r.cusps().get(0).p2(), 1e-6 * cMin);
+        checkRegions(r, (e, cs) -> c.withSourcePeak(e).withSeriesCapacitance(cs));
+
+        // (source, core-loss resistance) with the shunt capacitance in place.
+        double gMin = (w * w * base.totalCapacitance() - pc.a()) / (coefficient * w);
+        double rCusp = 1 / gMin;
+        FoldCurveResult rr = CONTINUATION.foldCurves(SOURCE, BalanceAxis.of(CircuitParameter.CORE_LOSS_RESISTANCE),
+                (e, res) -> base.withSourcePeak(e).withCoreLossResistance(res), 0, 3 * base.sourcePeak(), 0.5 * rCusp, 20 * rCusp,
+                base.sourcePeak(), base.coreLossResistance());
+        System.out.println("n=" + n + " R plane: cusps " + rr.cusps() + " segments " + rr.segments() + " regions " + rr.regions());
+        assertEquals(1, rr.cusps().size(), "cusps " + rr.cusps());
+        assertEquals(rCusp, rr.cusps().get(0).p2(), 1e-6 * rCusp);
+        checkRegions(rr, (e, res) -> base.withSourcePeak(e).withCoreLossResistance(res));
+    }
+
+    /**
+     * Above the cusp (core-loss resistance from 1.5 to 10 times 1/G_min) the jump-up and
+     * jump-down folds lie on two separate fold curves, both traced, and cut the window into three
+     * regions: normal only below the jump-down voltage, bistable between, ferroresonant only
+     * above the jump-up voltage, each checked against the closed form at its probe [der].
+     */
+    @Test
+    void threeRegionsAboveTheCusp() {
+        EquivalentCircuit base = siCircuit(9, true);
+        PolynomialCurve pc = (PolynomialCurve) base.magnetizing();
+        double w = base.omega();
+        double rCusp = 1 / ((w * w * base.totalCapacitance() - pc.a()) / (2 * Math.sqrt(9) / 8 * w));
+        CircuitPlane plane = (e, res) -> base.withSourcePeak(e).withCoreLossResistance(res);
+        FoldCurveResult r = CONTINUATION.foldCurves(SOURCE, BalanceAxis.of(CircuitParameter.CORE_LOSS_RESISTANCE), plane,
+                0, 2 * base.sourcePeak(), 1.5 * rCusp, 10 * rCusp, base.sourcePeak(), 3 * rCusp);
+        assertTrue(r.cusps().isEmpty(), "no cusp in the window: " + r.cusps());
+        assertEquals(2, r.segments().size(), "segments " + r.segments());
+        assertEquals(3, r.regions().size(), "regions " + r.regions());
+        checkRegions(r, plane);
+        for (FoldCurveResult.Region region : r.regions()) {
+            EquivalentCircuit c = plane.at(region.p1(), region.p2());
+            double[] f = SingleHarmonicBalanceTest.closedFormFolds(c, pc);
+            if (FoldCurveResult.FERRORESONANT_ONLY.equals(region.label())) {
+                assertTrue(region.p1() > f[0], "above the jump-up fold: " + region);
+            } else if (FoldCurveResult.ONE_STATE.equals(region.label())) {
+                assertTrue(region.p1() < f[2], "below the jump-down fold: " + region);
+            }
+        }
+        assertEquals(List.of(FoldCurveResult.BISTABLE, FoldCurveResult.FERRORESONANT_ONLY, FoldCurveResult.ONE_STATE),
+                r.regions().stream().map(FoldCurveResult.Region::label).sorted().toList());
+        // Every curve point is a fold of the closed form [der]: its source voltage is E_up or E_down of its circuit.
+        for (FoldCurveResult.CurvePoint p : r.curve()) {
+            double[] f = SingleHarmonicBalanceTest.closedFormFolds(plane.at(p.p1(), p.p2()), pc);
+            double nearest = Math.min(Math.abs(p.p1() - f[0]), Math.abs(p.p1() - f[2]));
+            assertEquals(0, nearest, 1e-7 * f[0], "point " + p);
+        }
+    }
+
+    /**
+     * Each region's label against the closed form at its probe point [der, DOMAIN.md §3]: two
+     * stable states exactly when the fold pair exists (kappa &gt; (2 sqrt(n)/(n-1)) delta) and
+     * E lies between the jump-down and jump-up voltages; one bistable region (the wedge).
+     */
+    private static void checkRegions(FoldCurveResult r, CircuitPlane plane) {
+        int bistable = 0;
+        for (FoldCurveResult.Region region : r.regions()) {
+            EquivalentCircuit c = plane.at(region.p1(), region.p2());
+            int states = closedFormStableStates(c, (PolynomialCurve) c.magnetizing());
+            assertEquals(states, region.stableStates(), "region " + region);
+            assertEquals(states == 2, FoldCurveResult.BISTABLE.equals(region.label()), "region " + region);
+            bistable += states == 2 ? 1 : 0;
+        }
+        assertEquals(1, bistable, "regions " + r.regions());
+    }
+
+    /** Stable single-harmonic states of a polynomial circuit from the closed form of DOMAIN.md §3 [der]. */
+    static int closedFormStableStates(EquivalentCircuit c, PolynomialCurve pc) {
+        double w = c.omega();
+        double kappa = w * w * c.totalCapacitance() - pc.a();
+        double delta = w * c.conductance();
+        int n = pc.n();
+        if (!(kappa > 2 * Math.sqrt(n) / (n - 1) * delta)) {
+            return 1;
+        }
+        double[] f = SingleHarmonicBalanceTest.closedFormFolds(c, pc);
+        double eDown = delta == 0 ? 0 : f[2];
+        return c.sourcePeak() > eDown && c.sourcePeak() < f[0] ? 2 : 1;
     }
 }
