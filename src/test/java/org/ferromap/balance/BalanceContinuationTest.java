@@ -184,6 +184,79 @@ class BalanceContinuationTest {
     }
 
     /**
+     * n = 11 at SI scale (b near 1e-21, kV, uF, MOhm, no hand scaling): the source branch passes
+     * both folds of the S without jumping. The fundamental flux is a single-valued, increasing
+     * parameter of the single-harmonic S curve (E is an explicit function of it, DOMAIN.md §3
+     * [der]), so a branch that does not jump visits the flux monotonically; every point satisfies
+     * the balance equation (relative residual 1e-9: Newton's 1e-9 scaled updates, quadratic).
+     * Started on the upper (ferroresonant) state it is followed the other way through the same
+     * folds [der: the same closed form].
+     */
+    @ParameterizedTest
+    @CsvSource({"NORMAL", "UPPER"})
+    void elevenThPowerSCurveWithoutJumping(StartState state) {
+        EquivalentCircuit c = siCircuit(11, true);
+        double[] ref = SingleHarmonicBalanceTest.closedFormFolds(c, (PolynomialCurve) c.magnetizing());
+        // The study's 28.17 kV lies between the folds: both states exist there.
+        assertTrue(c.sourcePeak() > ref[2] && c.sourcePeak() < ref[0]);
+        BranchResult b = CONTINUATION.branch(SOURCE, c::withSourcePeak, 0.5 * ref[2], 2 * ref[0], c.sourcePeak(), 1, state);
+        assertEquals(StartState.UPPER == state ? ref[3] : ref[1], b.startFlux(), 0.3 * ref[1], "start state " + state);
+        assertEquals(StopReason.WINDOW_LEFT, b.increasingStop(), b.increasingDetail());
+        assertEquals(StopReason.WINDOW_LEFT, b.decreasingStop(), b.decreasingDetail());
+        assertEquals(2, b.folds().size(), "folds " + b.folds());
+        List<BranchResult.Special> byFlux = b.folds().stream().sorted((x, y) -> Double.compare(x.flux(), y.flux())).toList();
+        assertEquals(ref[0], byFlux.get(0).parameter(), 1e-8 * ref[0]);
+        assertEquals(ref[2], byFlux.get(1).parameter(), 1e-8 * ref[0]);
+        List<BranchResult.Point> pts = b.points();
+        for (int k = 1; k < pts.size(); k++) {
+            assertTrue(pts.get(k).flux() > pts.get(k - 1).flux(), "flux not monotone at point " + k);
+        }
+        for (BranchResult.Point p : pts) {
+            EquivalentCircuit at = c.withSourcePeak(p.parameter());
+            assertEquals(0, SingleHarmonicBalanceTest.balanceResidual(at, p.flux()), 1e-9, "point " + p);
+        }
+        // Both ends on the window's edges, the upper state reached at the top.
+        assertEquals(0.5 * ref[2], pts.get(0).parameter(), 1e-9 * ref[0]);
+        assertEquals(2 * ref[0], pts.get(pts.size() - 1).parameter(), 1e-9 * ref[0]);
+        assertTrue(pts.get(pts.size() - 1).stable() && pts.get(0).stable());
+    }
+
+    /**
+     * With H harmonics the jump-up fold converges as H grows (DOMAIN.md §3 [der]: the harmonic
+     * balance converges to the periodic solution): the sequence is printed, the differences
+     * between successive odd orders shrink, and the last one is below 1e-4 of the fold voltage.
+     * Each fold also agrees with the fold found by the balance's own multi-harmonic tracer
+     * (MultiHarmonicBalance.folds, a different parametrisation and corrector) to 1e-7.
+     */
+    @Test
+    void multiHarmonicFoldConverges() {
+        EquivalentCircuit c = siCircuit(9, true);
+        double[] ref = SingleHarmonicBalanceTest.closedFormFolds(c, (PolynomialCurve) c.magnetizing());
+        int[] orders = {1, 3, 5, 7, 9};
+        double[] fold = new double[orders.length];
+        StringBuilder sequence = new StringBuilder("jump-up fold (V peak) by H:");
+        for (int i = 0; i < orders.length; i++) {
+            BranchResult b = CONTINUATION.branch(SOURCE, c::withSourcePeak, 0.9 * ref[0], 1.05 * ref[0], 0.95 * ref[0], orders[i],
+                    StartState.NORMAL);
+            assertTrue(b.folds().size() >= 1, "H = " + orders[i] + ": " + b.increasingDetail());
+            fold[i] = b.folds().get(0).parameter();
+            sequence.append(String.format(" H=%d %.6f", orders[i], fold[i]));
+            double other = new MultiHarmonicBalance(c, HarmonicSettings.DEFAULTS.withHarmonics(orders[i]))
+                    .folds(new SingleHarmonicBalance()).get(0).sourcePeak();
+            assertEquals(other, fold[i], 1e-7 * other, "H = " + orders[i]);
+            // The normal branch is stable up to the fold, the part past it unstable (Hill for H > 1).
+            BranchResult.Point first = b.points().get(0);
+            assertTrue(first.stable(), "normal state at the window's lower edge, H = " + orders[i]);
+        }
+        System.out.println(sequence);
+        for (int i = 2; i < orders.length; i++) {
+            assertTrue(Math.abs(fold[i] - fold[i - 1]) < Math.abs(fold[i - 1] - fold[i - 2]),
+                    "differences should shrink: " + sequence);
+        }
+        assertTrue(Math.abs(fold[orders.length - 1] - fold[orders.length - 2]) < 1e-4 * fold[0], sequence.toString());
+    }
+
+    /**
      * Each region's label against the closed form at its probe point [der, DOMAIN.md §3]: two
      * stable states exactly when the fold pair exists (kappa &gt; (2 sqrt(n)/(n-1)) delta) and
      * E lies between the jump-down and jump-up voltages; one bistable region (the wedge).
