@@ -186,7 +186,7 @@ public final class BalanceContinuation {
             startFlux = res.fundamental(upX[0]) * res.baseFlux;
         }
         return new BranchResult(axis.name(), axis.unit(), harmonics, harmonics == 1 ? "slow flow" : "Hill",
-                lo, hi, start, p0, state, startFlux, points, folds, branchPoints,
+                lo, hi, start, p0, state, seed.kind().label(), startFlux, points, folds, branchPoints,
                 up.stopReason(), up.stopDetail(), down.stopReason(), down.stopDetail(),
                 up.rejectedSteps().size() + down.rejectedSteps().size());
     }

@@ -18,7 +18,10 @@ import org.ferromap.continuation.StopReason;
  * @param requestedStart the value asked to start from (the study's own value), parameter unit;
  *        may lie outside the range or be infinite
  * @param start the value the branch started from: the requested one clamped into the range
- * @param startState which steady state the branch started on
+ * @param startState which steady state the branch was asked to start on
+ * @param startKind what the start point is by the single-harmonic balance ("normal",
+ *        "ferroresonant", "unstable"): the only stable state there when the one asked for does
+ *        not exist at the start value
  * @param startFlux fundamental flux amplitude at the start, Wb-turn peak
  * @param points every accepted point in branch order
  * @param folds located folds (limit points in the parameter) in branch order
@@ -39,6 +42,7 @@ public record BranchResult(
         double requestedStart,
         double start,
         StartState startState,
+        String startKind,
         double startFlux,
         List<Point> points,
         List<Special> folds,
