@@ -244,9 +244,18 @@ class BalanceContinuationTest {
             double other = new MultiHarmonicBalance(c, HarmonicSettings.DEFAULTS.withHarmonics(orders[i]))
                     .folds(new SingleHarmonicBalance()).get(0).sourcePeak();
             assertEquals(other, fold[i], 1e-7 * other, "H = " + orders[i]);
-            // The normal branch is stable up to the fold, the part past it unstable (Hill for H > 1).
-            BranchResult.Point first = b.points().get(0);
-            assertTrue(first.stable(), "normal state at the window's lower edge, H = " + orders[i]);
+            // A saddle-node exchanges stability [der]: the normal branch is stable up to the fold,
+            // the part past it has one unstable direction (slow flow for H = 1, Hill for H > 1).
+            // The two points next to the fold are left out: there one exponent is near zero.
+            int after = b.folds().get(0).afterIndex();
+            for (int k = 0; k < b.points().size(); k++) {
+                BranchResult.Point p = b.points().get(k);
+                if (k < after) {
+                    assertTrue(p.stable(), "H = " + orders[i] + " point " + k + " before the fold");
+                } else if (k > after + 1) {
+                    assertEquals(1, p.unstableDirections(), "H = " + orders[i] + " point " + k + " after the fold");
+                }
+            }
         }
         System.out.println(sequence);
         for (int i = 2; i < orders.length; i++) {
