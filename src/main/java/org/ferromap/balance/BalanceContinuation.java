@@ -260,7 +260,7 @@ public final class BalanceContinuation {
             double[][] fx = fc.x();
             for (int k = 0; k < fc.size(); k++) {
                 curve.add(new FoldCurveResult.CurvePoint(fc.p(k), fc.q(k), res.fundamental(fx[k]) * res.baseFlux, segment));
-                line[k] = new double[] {(fc.p(k) - lo1) / (hi1 - lo1), (fc.q(k) - lo2) / (hi2 - lo2)};
+                line[k] = new double[] {unit(fc.p(k), lo1, hi1), unit(fc.q(k), lo2, hi2)};
             }
             polylines.add(line);
             for (SpecialPoint cusp : fc.cusps()) {
@@ -271,15 +271,15 @@ public final class BalanceContinuation {
 
         List<FoldCurveResult.Region> regions = new ArrayList<>();
         for (PlaneRegions.Raw raw : PlaneRegions.find(polylines)) {
-            double a = lo1 + raw.u() * (hi1 - lo1);
-            double b = lo2 + raw.v() * (hi2 - lo2);
+            double a = value(raw.u(), lo1, hi1);
+            double b = value(raw.v(), lo2, hi2);
             int[] probe = classify(plane, a, b);
             String label = label(probe);
             if (!FoldCurveResult.BISTABLE.equals(label)) {
                 // A one-state region may wrap round a cusp, its state going continuously from
                 // normal to ferroresonant: call it ferroresonant-only only if every sample agrees.
                 for (double[] uv : raw.samples()) {
-                    String other = label(classify(plane, lo1 + uv[0] * (hi1 - lo1), lo2 + uv[1] * (hi2 - lo2)));
+                    String other = label(classify(plane, value(uv[0], lo1, hi1), value(uv[1], lo2, hi2)));
                     if (!other.equals(label) && !FoldCurveResult.BISTABLE.equals(other)) {
                         label = FoldCurveResult.ONE_STATE;
                     }
@@ -289,6 +289,25 @@ public final class BalanceContinuation {
         }
         return new FoldCurveResult(p1.name(), p1.unit(), p2.name(), p2.unit(), lo1, hi1, lo2, hi2, s1, qStart,
                 curve, cusps, segments, regions);
+    }
+
+    /**
+     * Position of v in [lo, hi] as a fraction, logarithmic when the range is positive and spans
+     * a factor of 20 or more (as the charts draw it), so that regions are found and probed where
+     * a reader sees them.
+     */
+    static double unit(double v, double lo, double hi) {
+        return logarithmic(lo, hi) ? Math.log(v / lo) / Math.log(hi / lo) : (v - lo) / (hi - lo);
+    }
+
+    /** The inverse of {@link #unit}. */
+    static double value(double u, double lo, double hi) {
+        return logarithmic(lo, hi) ? lo * Math.pow(hi / lo, u) : lo + u * (hi - lo);
+    }
+
+    /** Whether a range is drawn and rastered on a logarithmic scale: positive and spanning a factor of 20 or more. */
+    public static boolean logarithmic(double lo, double hi) {
+        return lo > 0 && hi / lo >= 20;
     }
 
     /** {stable states, 1 if the single stable state is ferroresonant} at (a, b); {-1, 0} where the circuit is refused. */

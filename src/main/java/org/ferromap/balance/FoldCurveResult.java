@@ -98,7 +98,7 @@ public record FoldCurveResult(
      * @param p1 P1 of the probe point, its unit
      * @param p2 P2 of the probe point, its unit
      * @param stableStates stable single-harmonic steady states at the probe point
-     * @param share fraction of the window's area (on the raster used to find regions)
+     * @param share fraction of the window's area as drawn (logarithmic axes where a range spans a factor of 20)
      */
     public record Region(String label, double p1, double p2, int stableStates, double share) { }
 }

@@ -5,6 +5,7 @@ import java.awt.Color;
 import java.nio.file.Path;
 import java.util.ArrayList;
 import java.util.List;
+import org.ferromap.balance.BalanceContinuation;
 import org.ferromap.balance.BranchResult;
 import org.ferromap.balance.FoldCurveResult;
 import org.knowm.xchart.AnnotationText;
@@ -144,8 +145,8 @@ public final class BalanceCharts {
         DisplayUnit yu = DisplayUnit.of(r.p2Unit(), Math.max(Math.abs(r.p2From()), Math.abs(r.p2To())));
         XYChart c = ChartFiles.xyChart(fit("Fold curves: " + title),
                 r.p1() + " (" + xu.label() + ")", r.p2() + " (" + yu.label() + ")");
-        boolean logX = r.p1From() > 0 && r.p1To() / r.p1From() >= 20;
-        boolean logY = r.p2From() > 0 && r.p2To() / r.p2From() >= 20;
+        boolean logX = BalanceContinuation.logarithmic(r.p1From(), r.p1To());
+        boolean logY = BalanceContinuation.logarithmic(r.p2From(), r.p2To());
         c.getStyler().setXAxisLogarithmic(logX);
         c.getStyler().setYAxisLogarithmic(logY);
         c.getStyler().setXAxisMin(xu.scale(r.p1From()));
