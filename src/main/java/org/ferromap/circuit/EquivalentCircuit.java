@@ -80,6 +80,11 @@ public record EquivalentCircuit(
         return 1.0 / coreLossResistance + 1.0 / loadResistance;
     }
 
+    public EquivalentCircuit withOmega(double w) {
+        return new EquivalentCircuit(w, sourcePeak, sourceAngle, seriesCapacitance, shuntCapacitance,
+                coreLossResistance, loadResistance, magnetizing, exactness, ratedPeak);
+    }
+
     public EquivalentCircuit withSourcePeak(double v) {
         return new EquivalentCircuit(omega, v, sourceAngle, seriesCapacitance, shuntCapacitance,
                 coreLossResistance, loadResistance, magnetizing, exactness, ratedPeak);
