@@ -37,8 +37,8 @@ public final class ModeRules {
 
     /**
      * Ratio of the late to the early recurrence distance below which the samples are still closing
-     * in on a periodic state (a factor 2 over a span of periods is far beyond the jitter of a
-     * quasi-periodic or chaotic record). A modelling choice, no source.
+     * in on a periodic state (a factor 2 between the start and the end of the record is far beyond
+     * the jitter of a quasi-periodic or chaotic record's medians). A modelling choice, no source.
      */
     public static final double CONTRACTION_RATIO = 0.5;
 
@@ -76,6 +76,21 @@ public final class ModeRules {
      */
     public static Recurrence recurrence(double[][] samples, int from, int newest, int maxOrder, double tolerance,
             int span) {
+        return recurrence(samples, from, newest, maxOrder, tolerance, span, 0.0);
+    }
+
+    /**
+     * As {@link #recurrence(double[][], int, int, int, double, int)}, and a p &gt; 1 counts only
+     * when no smaller order comes within {@code distinct} (relative, like the tolerance): the p
+     * points of a subharmonic are distinct, while a trajectory still settling onto a state of
+     * lower period can, for a while, repeat better after p periods than after one (a decaying
+     * transient whose own frequency is close to a multiple of f0/p). Then no period is returned,
+     * and {@code closest} names the smaller order.
+     *
+     * @param distinct smallest relative distance at every order below p for p to count; 0 turns the check off
+     */
+    public static Recurrence recurrence(double[][] samples, int from, int newest, int maxOrder, double tolerance,
+            int span, double distinct) {
         if (newest - from < span + maxOrder) {
             return new Recurrence(0, Double.NaN, 0);
         }
@@ -87,6 +102,9 @@ public final class ModeRules {
                 worst = Math.max(worst, distance(samples, j, j - p) / (1 + norm(samples, j)));
             }
             if (worst <= tolerance) {
+                if (best < distinct) {
+                    return new Recurrence(0, best, bestP);
+                }
                 return new Recurrence(p, worst, p);
             }
             if (worst < best) {
@@ -100,7 +118,8 @@ public final class ModeRules {
     /**
      * Whether the samples are still closing in on a state of period p: the median distance
      * |z_j - z_{j-p}| over the last {@code span} samples is below {@link #CONTRACTION_RATIO} times
-     * that over the {@code span} samples before them.
+     * that over the first {@code span} samples after {@code from}. A quasi-periodic or chaotic
+     * record keeps its distances from start to end; a decaying transient loses them.
      */
     public static boolean contracting(double[][] samples, int from, int newest, int p, int span) {
         if (p < 1 || newest - from < 2 * span + p) {
@@ -111,7 +130,8 @@ public final class ModeRules {
         for (int i = 0; i < span; i++) {
             int j = newest - i;
             late[i] = distance(samples, j, j - p);
-            early[i] = distance(samples, j - span, j - span - p);
+            int k = from + p + i;
+            early[i] = distance(samples, k, k - p);
         }
         return median(late) < CONTRACTION_RATIO * median(early);
     }
@@ -174,7 +194,7 @@ public final class ModeRules {
             String figures = String.format("largest Lyapunov exponent %.4g per period, 0-1 test K = %.3f", lyap, k);
             if (Double.isNaN(k)) {
                 return new Verdict(SteadyMode.UNDETERMINED, "too few periods after the transient ("
-                        + in.periodsAfterTransient() + ") for the 0-1 test and the Lyapunov exponent; raise max periods");
+                        + in.periodsAfterTransient() + ") for the 0-1 test and the Lyapunov exponent; raise the number of periods");
             }
             if (lyap > band && k > threshold) {
                 return new Verdict(SteadyMode.CHAOTIC, "chaotic: " + figures);
@@ -213,9 +233,9 @@ public final class ModeRules {
     }
 
     /**
-     * Share of the AC power (lines above DC) held by the main lobes (+-2 bins) of the
-     * {@link #LINES_COUNTED} strongest local maxima of an amplitude spectrum; NaN when it has no
-     * AC power.
+     * Share of the AC power (lines above DC) held by the {@link #LINES_COUNTED} strongest lines of
+     * an amplitude spectrum, each with the +-2 bins of its Hann main lobe (taken greedily, strongest
+     * first, never counting a bin twice); NaN when it has no AC power.
      */
     public static double lineShare(Spectrum spectrum) {
         double[] a = spectrum.amplitude();

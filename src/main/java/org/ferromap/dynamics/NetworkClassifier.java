@@ -43,6 +43,13 @@ public final class NetworkClassifier {
      */
     public static final double RECURRENCE_TOLERANCE = 1e-4;
 
+    /**
+     * Relative distance, per unit, that every smaller order must keep for a subharmonic verdict:
+     * ten times the recurrence tolerance (see {@link ModeRules#recurrence(double[][], int, int, int,
+     * double, int, double)}). A modelling choice, no source.
+     */
+    public static final double DISTINCT = 10 * RECURRENCE_TOLERANCE;
+
     /** The words that say which indicators decide, for reports. */
     public static final String METHOD_PERIODIC = "recurrence of the stroboscopic samples of every state (relative "
             + "tolerance " + RECURRENCE_TOLERANCE + " over the last " + Simulator.RECURRENCE_SPAN
@@ -86,18 +93,11 @@ public final class NetworkClassifier {
                     Double.NaN, Double.NaN, Spectrum.empty(), emptyWindow, emptyWindow, METHOD_NOT_PERIODIC,
                     "no pole opened within the run: nothing to classify");
         }
-        StateLayout layout = r.layout();
-        double[][] pu = new double[layout.dimension()][];
-        for (int i = 0; i < pu.length; i++) {
-            pu[i] = r.strobes()[i].clone();
-            for (int k = 0; k < pu[i].length; k++) {
-                pu[i][k] /= layout.scale(i);
-            }
-        }
+        double[][] pu = perUnitStrobes(r);
         int newest = pu[0].length - 1;
         int from = (int) Math.ceil(lastOpening / period - 1e-9) + s.transientPeriods();
         ModeRules.Recurrence rec = ModeRules.recurrence(pu, from, newest, s.maxOrder(), RECURRENCE_TOLERANCE,
-                Simulator.RECURRENCE_SPAN);
+                Simulator.RECURRENCE_SPAN, DISTINCT);
 
         double[] time = r.time();
         int samples = time.length - 1;     // whole periods: the last sample closes the window
@@ -159,6 +159,19 @@ public final class NetworkClassifier {
         int sectionFrom = Math.max(Math.max(0, Math.min(from, newest)), newest + 1 - SimulationResult.SECTION_LIMIT);
         return new SettledState(v.mode(), 0, peak, peak / ratedPeak, k, share, rec.residual(), Double.NaN, spectrum,
                 window, section(r, sectionFrom, newest), METHOD_NOT_PERIODIC, v.reason());
+    }
+
+    /** The stroboscopic samples of every state component in per unit of its base, [component][k]. */
+    static double[][] perUnitStrobes(NetworkResult r) {
+        StateLayout layout = r.layout();
+        double[][] pu = new double[layout.dimension()][];
+        for (int i = 0; i < pu.length; i++) {
+            pu[i] = r.strobes()[i].clone();
+            for (int k = 0; k < pu[i].length; k++) {
+                pu[i][k] /= layout.scale(i);
+            }
+        }
+        return pu;
     }
 
     private static SettledState undetermined(ModeRules.Recurrence rec, String reason) {

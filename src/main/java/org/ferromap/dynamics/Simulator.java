@@ -268,7 +268,7 @@ public final class Simulator {
             Waveform section = new Waveform(ot, scaled(ox, model.fluxBase()), scaled(oy, model.voltageBase()));
             return new SimulationResult(mode, p, peak * model.voltageBase(), peak, lyap, Double.NaN, certified,
                     orbit.multiplierReal(), orbit.multiplierImag(), phase, spectrum, window, strobeFlux(),
-                    strobeVoltage(), newest, evaluations(), note, event(), section());
+                    strobeVoltage(), newest, evaluations(), note, event(), section);
         }
 
         /** Classification when the run used all its periods without certifying an orbit. */
