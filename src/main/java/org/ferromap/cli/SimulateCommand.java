@@ -103,6 +103,10 @@ final class SimulateCommand extends BaseCommand {
             description = "Equipment studies: simulate the reduced single-phase circuit instead of the three-phase network.")
     boolean reduced;
 
+    @Option(names = "--no-charts",
+            description = "Write the CSV and JSON only, no PNG, SVG or PDF (faster for scripted runs).")
+    boolean noCharts;
+
     @Option(names = "--rtol", paramLabel = "X",
             description = "Relative tolerance of the integration, in [1e-12, 1e-3] (default 1e-9 single-phase, "
                     + "1e-8 three-phase).")
@@ -134,7 +138,8 @@ final class SimulateCommand extends BaseCommand {
      * @param periodsSimulated source periods integrated
      * @param rhsEvaluations right-hand-side evaluations spent
      * @param sourceAngleDeg source angle used at t = 0, deg
-     * @param openingTimes instant each pole opened, s (phases a, b, c; null for closed poles); empty single-phase
+     * @param openingTimes instant each pole opened, s (phases a, b, c; null for a pole that stayed closed);
+     *        empty for the single-phase circuit
      * @param opening how the poles open ("at command", "at current zero"), null single-phase
      * @param folder where the charts and CSV were written
      */
@@ -142,8 +147,13 @@ final class SimulateCommand extends BaseCommand {
                         double lyapunov, List<double[]> section, String reason, String method, boolean certified,
                         List<double[]> multipliers, double zeroOneK, double lineShare, double fundamentalPhaseDeg,
                         String observed, double perUnitBase, String exactness, String reduction, int periods,
-                        int periodsSimulated, long rhsEvaluations, double sourceAngleDeg, double[] openingTimes,
+                        int periodsSimulated, long rhsEvaluations, double sourceAngleDeg, Double[] openingTimes,
                         String opening, String folder) {
+
+        SimulateJson {
+            // boxed, so that a closed pole's NaN is written as null like every other missing number
+            openingTimes = openingTimes == null ? new Double[0] : openingTimes.clone();
+        }
 
         SimulateJson withFolder(String f) {
             return new SimulateJson(study, model, mode, period, peakVoltage, peakVoltagePu, lyapunov, section, reason,
@@ -169,7 +179,7 @@ final class SimulateCommand extends BaseCommand {
         Outcome o = threePhase ? network(s, n) : circuit(s, n);
         Path dir;
         try (OutputFolder f = OutputFolder.open(study.folderFor("simulate"))) {
-            writeCharts(s.title(), o.charts(), f.staging());
+            writeCharts(s.title(), o.charts(), f.staging(), !noCharts);
             Json.write(o.json().withFolder(f.target().toString()), f.file("simulate.json"));
             dir = f.commit();
         }
@@ -334,6 +344,7 @@ final class SimulateCommand extends BaseCommand {
         String method = r.certified()
                 ? "Newton on the period map certified a stable periodic orbit (Floquet multipliers inside the unit circle)"
                 : r.period() > 0 ? "recurrence of the stroboscopic samples (relative 1e-6), orbit refined by Newton"
+                : r.window().size() == 0 ? "none: no settled window to classify"
                 : "largest Lyapunov exponent (Benettin) and 0-1 test on the stroboscopic voltage";
         String observed = s.isEquipmentForm()
                 ? "terminal voltage of the reduced single-phase circuit: the loop voltage W of the reduction"
@@ -342,7 +353,7 @@ final class SimulateCommand extends BaseCommand {
                 r.peakPerUnit(), r.lyapunovPerPeriod(), pairs(r.section()), r.reason(), method, r.certified(),
                 multipliers, r.zeroOneK(), Double.NaN, Math.toDegrees(r.fundamentalPhase()), observed, c.ratedPeak(),
                 s.exactness().explanation(), s.isEquipmentForm() ? s.reduction().explanation() : null, n,
-                r.periodsSimulated(), r.rhsEvaluations(), Math.toDegrees(used), new double[0], null, null);
+                r.periodsSimulated(), r.rhsEvaluations(), Math.toDegrees(used), new Double[0], null, null);
 
         // Charts: the event with the source for reference, the settled window.
         Waveform ev = r.event();
@@ -398,7 +409,7 @@ final class SimulateCommand extends BaseCommand {
                 st.peakPerUnit(), Double.NaN, pairs(st.section()), st.reason(), st.method(), false, List.of(),
                 st.zeroOneK(), st.lineShare(), Math.toDegrees(st.fundamentalPhase()), observed, rated, exactness,
                 s.reduction().explanation(), n, out.periodsSimulated(), r == null ? 0 : r.evaluations(),
-                Math.toDegrees(net.sourceAngle()), opened, opening, null);
+                Math.toDegrees(net.sourceAngle()), boxed(opened), opening, null);
         if (r == null) {
             Charts none = new Charts(new double[0], List.of(), new double[0], new double[0], List.of(), "lambda_a",
                     Waveform.empty(), Spectrum.empty(), f);
@@ -425,6 +436,14 @@ final class SimulateCommand extends BaseCommand {
 
     // ------------------------------------------------------------------ output
 
+    private static Double[] boxed(double[] v) {
+        Double[] out = new Double[v.length];
+        for (int i = 0; i < v.length; i++) {
+            out[i] = v[i];
+        }
+        return out;
+    }
+
     private static List<double[]> pairs(Waveform w) {
         List<double[]> out = new ArrayList<>(w.size());
         for (int k = 0; k < w.size(); k++) {
@@ -433,14 +452,15 @@ final class SimulateCommand extends BaseCommand {
         return out;
     }
 
-    private static void writeCharts(String title, Charts c, Path dir) {
-        SimulationCharts.waveform("Switching event: " + title, c.eventTime(), c.event(), c.marks(), dir, "event");
-        SimulationCharts.waveform("Settled state: " + title, c.settledTime(), c.settled(), new double[0], dir, "settled");
+    private static void writeCharts(String title, Charts c, Path dir, boolean draw) {
+        SimulationCharts.waveform("Switching event: " + title, c.eventTime(), c.event(), c.marks(), dir, "event", draw);
+        SimulationCharts.waveform("Settled state: " + title, c.settledTime(), c.settled(), new double[0], dir, "settled",
+                draw);
         String vName = c.fluxName().startsWith("lambda_") ? "v_a" : "v";
         SimulationCharts.section("Stroboscopic section: " + title, c.fluxName(), c.section().flux(), vName,
-                c.section().voltage(), dir, "section");
+                c.section().voltage(), dir, "section", draw);
         SimulationCharts.spectrum("Spectrum of the settled " + vName + ": " + title, c.spectrum().frequency(),
-                c.spectrum().amplitude(), c.frequency(), dir, "spectrum");
+                c.spectrum().amplitude(), c.frequency(), dir, "spectrum", draw);
     }
 
     private void printSummary(SimulateJson j) {

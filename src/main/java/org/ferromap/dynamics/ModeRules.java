@@ -117,17 +117,20 @@ public final class ModeRules {
 
     /**
      * Whether the samples are still closing in on a state of period p: the median distance
-     * |z_j - z_{j-p}| over the last {@code span} samples is below {@link #CONTRACTION_RATIO} times
-     * that over the first {@code span} samples after {@code from}. A quasi-periodic or chaotic
-     * record keeps its distances from start to end; a decaying transient loses them.
+     * |z_j - z_{j-p}| over the last quarter of the samples after {@code from} is below
+     * {@link #CONTRACTION_RATIO} times that over the first quarter. A quasi-periodic or chaotic
+     * record keeps its distances from start to end (medians over a quarter of a record of a hundred
+     * or more samples hardly move); a decaying transient loses them. False when a quarter holds
+     * fewer than {@code minimum} samples.
      */
-    public static boolean contracting(double[][] samples, int from, int newest, int p, int span) {
-        if (p < 1 || newest - from < 2 * span + p) {
+    public static boolean contracting(double[][] samples, int from, int newest, int p, int minimum) {
+        int quarter = (newest - from + 1 - p) / 4;
+        if (p < 1 || quarter < Math.max(1, minimum)) {
             return false;
         }
-        double[] late = new double[span];
-        double[] early = new double[span];
-        for (int i = 0; i < span; i++) {
+        double[] late = new double[quarter];
+        double[] early = new double[quarter];
+        for (int i = 0; i < quarter; i++) {
             int j = newest - i;
             late[i] = distance(samples, j, j - p);
             int k = from + p + i;

@@ -116,7 +116,9 @@ public final class NetworkClassifier {
 
         if (rec.periodic()) {
             int p = rec.period();
-            int whole = recordedPeriods >= p ? p * (recordedPeriods / p) : recordedPeriods;
+            // Only the periods over which the samples were seen to repeat: the whole orbits within
+            // the recurrence span (earlier periods of the window may still carry the transient).
+            int whole = Math.min(recordedPeriods, p * Math.max(1, Simulator.RECURRENCE_SPAN / p));
             int n = whole * perPeriod;
             int start = samples - n;
             Spectrum spectrum = Spectrum.ofWholePeriods(Arrays.copyOfRange(va, start, samples), n * dt, 1.0);

@@ -19,7 +19,8 @@ package org.ferromap.dynamics;
  *        rad in (-pi, pi] (near 0 normal, near pi ferroresonant); NaN unless period 1
  * @param spectrum amplitude spectrum of the open phase's node voltage over the analysed window, Hz and V
  * @param window the analysed window of the first open phase: node voltage (V) and the flux
- *        linkage of its winding (Wb-turn); whole periods of a periodic state
+ *        linkage of its winding (Wb-turn); for a periodic state the whole orbits within the last
+ *        periods over which the samples were seen to repeat
  * @param section stroboscopic samples of the same two quantities: the last p samples of a
  *        periodic state, the samples after the transient otherwise (at most
  *        {@link SimulationResult#SECTION_LIMIT})

@@ -18,6 +18,13 @@ public final class SimulationCharts {
     /** Highest harmonic of the source frequency drawn on the spectrum chart (the CSV keeps every line). */
     public static final int SPECTRUM_HARMONICS = 20;
 
+    /**
+     * Most points drawn per series: longer series are thinned to the smallest and largest value
+     * of each of half as many buckets, which keeps every peak and trough on the chart (the CSV
+     * keeps every sample). Rendering time grows with the points drawn, not the pixels.
+     */
+    public static final int MAX_POINTS_DRAWN = 1000;
+
     /** Amplitudes below this fraction of the strongest line are drawn at it (log axis floor). */
     private static final double SPECTRUM_FLOOR = 1e-6;
 
@@ -42,12 +49,13 @@ public final class SimulationCharts {
      * @param marks instants to mark with a vertical line (switching), s; NaN entries skipped
      * @param dir folder to write into
      * @param name base file name
+     * @param draw whether to draw the chart (PNG, SVG, PDF); the CSV is written either way
      * @return the files written
      */
     public static List<Path> waveform(String title, double[] time, List<Trace> traces, double[] marks, Path dir,
-            String name) {
+            String name, boolean draw) {
         List<Path> files = new ArrayList<>();
-        if (time.length >= 2) {
+        if (draw && time.length >= 2) {
             XYChart c = ChartFiles.xyChart(title, "time (ms)", "voltage (kV)");
             double[] ms = scaled(time, 1e3);
             double lo = Double.POSITIVE_INFINITY;
@@ -61,7 +69,8 @@ public final class SimulationCharts {
                     lo = Math.min(lo, v);
                     hi = Math.max(hi, v);
                 }
-                XYSeries s = c.addSeries(t.name(), ms, kv);
+                double[][] drawn = thinned(ms, kv);
+                XYSeries s = c.addSeries(t.name(), drawn[0], drawn[1]);
                 s.setMarker(SeriesMarkers.NONE);
                 s.setLineStyle(ChartFiles.solid());
             }
@@ -100,15 +109,15 @@ public final class SimulationCharts {
 
     /**
      * The stroboscopic section: flux linkage (Wb-turn) against voltage (chart in kV, CSV in V),
-     * one marker per source period.
+     * one marker per source period; {@code draw} as for {@link #waveform}.
      *
      * @param fluxName name of the flux quantity, e.g. "lambda_a"
      * @param voltageName name of the voltage quantity, e.g. "v_a"
      */
     public static List<Path> section(String title, String fluxName, double[] flux, String voltageName,
-            double[] voltage, Path dir, String name) {
+            double[] voltage, Path dir, String name, boolean draw) {
         List<Path> files = new ArrayList<>();
-        if (flux.length > 0) {
+        if (draw && flux.length > 0) {
             XYChart c = ChartFiles.xyChart(title, fluxName + " (Wb-turn)", voltageName + " (kV)");
             ChartFiles.markers(c, "once a source period", flux, scaled(voltage, 1e-3), ChartFiles.PALETTE[0]);
             c.getStyler().setMarkerSize(flux.length > 200 ? 3 : 7);
@@ -126,12 +135,12 @@ public final class SimulationCharts {
 
     /**
      * The amplitude spectrum: chart up to {@link #SPECTRUM_HARMONICS} times the source frequency
-     * on a log axis, CSV of every line (Hz, V peak).
+     * on a log axis, CSV of every line (Hz, V peak); {@code draw} as for {@link #waveform}.
      *
      * @param sourceFrequency Hz, for the chart's range
      */
     public static List<Path> spectrum(String title, double[] frequency, double[] amplitude, double sourceFrequency,
-            Path dir, String name) {
+            Path dir, String name, boolean draw) {
         List<Path> files = new ArrayList<>();
         int n = 0;
         double top = 0;
@@ -139,7 +148,7 @@ public final class SimulationCharts {
             top = Math.max(top, amplitude[n]);
             n++;
         }
-        if (n >= 2 && top > 0) {
+        if (draw && n >= 2 && top > 0) {
             double[] f = new double[n];
             double[] kv = new double[n];
             for (int k = 0; k < n; k++) {
@@ -148,7 +157,8 @@ public final class SimulationCharts {
             }
             XYChart c = ChartFiles.xyChart(title, "frequency (Hz)", "amplitude (kV peak)");
             c.getStyler().setYAxisLogarithmic(true);
-            XYSeries s = c.addSeries("amplitude", f, kv);
+            double[][] drawn = thinned(f, kv);
+            XYSeries s = c.addSeries("amplitude", drawn[0], drawn[1]);
             s.setMarker(n <= 200 ? SeriesMarkers.CIRCLE : SeriesMarkers.NONE);
             s.setLineStyle(ChartFiles.solid());
             c.getStyler().setLegendVisible(false);
@@ -162,6 +172,46 @@ public final class SimulationCharts {
         Csv.write(csv, List.of("frequency (Hz)", "amplitude (V peak)"), rows);
         files.add(csv);
         return files;
+    }
+
+    /**
+     * At most {@link #MAX_POINTS_DRAWN} points of (x, y): the first and last point, and in between
+     * the smallest and the largest y of each bucket of consecutive samples, in their order.
+     */
+    static double[][] thinned(double[] x, double[] y) {
+        int n = x.length;
+        if (n <= MAX_POINTS_DRAWN) {
+            return new double[][] {x, y};
+        }
+        int buckets = (MAX_POINTS_DRAWN - 2) / 2;
+        double[] tx = new double[2 * buckets + 2];
+        double[] ty = new double[tx.length];
+        int m = 0;
+        tx[m] = x[0];
+        ty[m++] = y[0];
+        for (int b = 0; b < buckets; b++) {
+            int from = 1 + (int) ((long) b * (n - 2) / buckets);
+            int to = 1 + (int) ((long) (b + 1) * (n - 2) / buckets);
+            int lo = from;
+            int hi = from;
+            for (int j = from; j < to; j++) {
+                if (y[j] < y[lo]) {
+                    lo = j;
+                }
+                if (y[j] > y[hi]) {
+                    hi = j;
+                }
+            }
+            int a = Math.min(lo, hi);
+            int z = Math.max(lo, hi);
+            tx[m] = x[a];
+            ty[m++] = y[a];
+            tx[m] = x[z];
+            ty[m++] = y[z];
+        }
+        tx[m] = x[n - 1];
+        ty[m++] = y[n - 1];
+        return new double[][] {java.util.Arrays.copyOf(tx, m), java.util.Arrays.copyOf(ty, m)};
     }
 
     private static double[] scaled(double[] v, double f) {
