@@ -15,7 +15,8 @@ import org.ferromap.errors.FerromapException;
  * trajectory has reached a stable periodic orbit; if so it stops at once. This is what makes
  * lightly damped cases, which close in on their orbit over hundreds of periods, affordable.
  *
- * <p>Classification rules:
+ * <p>Classification rules (the shared ones live in {@link ModeRules}, which the three-phase
+ * {@link NetworkClassifier} applies too):
  * <ul>
  * <li>A certified orbit (or, without certification, stroboscopic samples that repeat after p
  * periods to 1e-6 per unit over the last 10 periods) of period p &gt; 1 is subharmonic.</li>
