@@ -164,7 +164,7 @@ final class SimulateCommand extends BaseCommand {
     }
 
     /** Data for the four charts. */
-    private record Charts(double[] eventTime, List<SimulationCharts.Trace> event, double[] marks,
+    private record Charts(double[] eventTime, List<SimulationCharts.Trace> event, List<SimulationCharts.Mark> marks,
                           double[] settledTime, List<SimulationCharts.Trace> settled, String fluxName, Waveform section,
                           Spectrum spectrum, double frequency) { }
 
@@ -366,7 +366,7 @@ final class SimulateCommand extends BaseCommand {
         Waveform w = r.window();
         List<SimulationCharts.Trace> settled = List.of(new SimulationCharts.Trace("v", "V", w.voltage()),
                 new SimulationCharts.Trace("lambda", "Wb-turn", w.flux()));
-        Charts ch = new Charts(ev.time(), event, new double[0], w.time(), settled, "lambda", r.section(), r.spectrum(),
+        Charts ch = new Charts(ev.time(), event, List.of(), w.time(), settled, "lambda", r.section(), r.spectrum(),
                 c.omega() / (2 * Math.PI));
         return new Outcome(j, ch);
     }
@@ -411,7 +411,7 @@ final class SimulateCommand extends BaseCommand {
                 s.reduction().explanation(), n, out.periodsSimulated(), r == null ? 0 : r.evaluations(),
                 Math.toDegrees(net.sourceAngle()), boxed(opened), opening, null);
         if (r == null) {
-            Charts none = new Charts(new double[0], List.of(), new double[0], new double[0], List.of(), "lambda_a",
+            Charts none = new Charts(new double[0], List.of(), List.of(), new double[0], List.of(), "lambda_a",
                     Waveform.empty(), Spectrum.empty(), f);
             return new Outcome(j, none);
         }
@@ -429,7 +429,13 @@ final class SimulateCommand extends BaseCommand {
             settled.add(new SimulationCharts.Trace(name, layout.unit(order),
                     Arrays.copyOfRange(r.waveforms()[order], from, samples)));
         }
-        Charts ch = new Charts(r.eventTime(), event, opened, Arrays.copyOfRange(r.time(), from, samples), settled,
+        List<SimulationCharts.Mark> marks = new ArrayList<>();
+        for (int k = 0; k < 3; k++) {
+            if (!Double.isNaN(opened[k])) {
+                marks.add(new SimulationCharts.Mark("pole " + "abc".charAt(k) + " opens", opened[k]));
+            }
+        }
+        Charts ch = new Charts(r.eventTime(), event, marks, Arrays.copyOfRange(r.time(), from, samples), settled,
                 layout.name(0), st.section(), st.spectrum(), f);
         return new Outcome(j, ch);
     }
@@ -454,7 +460,7 @@ final class SimulateCommand extends BaseCommand {
 
     private static void writeCharts(String title, Charts c, Path dir, boolean draw) {
         SimulationCharts.waveform("Switching event: " + title, c.eventTime(), c.event(), c.marks(), dir, "event", draw);
-        SimulationCharts.waveform("Settled state: " + title, c.settledTime(), c.settled(), new double[0], dir, "settled",
+        SimulationCharts.waveform("Settled state: " + title, c.settledTime(), c.settled(), List.of(), dir, "settled",
                 draw);
         String vName = c.fluxName().startsWith("lambda_") ? "v_a" : "v";
         SimulationCharts.section("Stroboscopic section: " + title, c.fluxName(), c.section().flux(), vName,

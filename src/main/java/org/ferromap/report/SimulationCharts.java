@@ -41,18 +41,26 @@ public final class SimulationCharts {
     public record Trace(String name, String unit, double[] values) { }
 
     /**
+     * An instant marked on a waveform chart with a dashed vertical line (a pole opening).
+     *
+     * @param name legend entry, e.g. "pole a opens"
+     * @param time s; NaN marks nothing
+     */
+    public record Mark(String name, double time) { }
+
+    /**
      * Voltages (and other traces) against time: a chart in ms and kV and a CSV in s and SI.
      *
      * @param title chart title
      * @param time sample instants, s
      * @param traces the series drawn; those whose unit is "V" are plotted (in kV), every trace goes to the CSV
-     * @param marks instants to mark with a vertical line (switching), s; NaN entries skipped
+     * @param marks instants to mark with a vertical line (switching); those outside the record are skipped
      * @param dir folder to write into
      * @param name base file name
      * @param draw whether to draw the chart (PNG, SVG, PDF); the CSV is written either way
      * @return the files written
      */
-    public static List<Path> waveform(String title, double[] time, List<Trace> traces, double[] marks, Path dir,
+    public static List<Path> waveform(String title, double[] time, List<Trace> traces, List<Mark> marks, Path dir,
             String name, boolean draw) {
         List<Path> files = new ArrayList<>();
         if (draw && time.length >= 2) {
@@ -74,11 +82,10 @@ public final class SimulationCharts {
                 s.setMarker(SeriesMarkers.NONE);
                 s.setLineStyle(ChartFiles.solid());
             }
-            int k = 0;
-            for (double m : marks) {
+            for (Mark mark : marks) {
+                double m = mark.time();
                 if (Double.isFinite(m) && m >= time[0] && m <= time[time.length - 1] && hi > lo) {
-                    XYSeries s = c.addSeries("opening" + (k++ == 0 ? "" : " " + k), new double[] {m * 1e3, m * 1e3},
-                            new double[] {lo, hi});
+                    XYSeries s = c.addSeries(mark.name(), new double[] {m * 1e3, m * 1e3}, new double[] {lo, hi});
                     s.setMarker(SeriesMarkers.NONE);
                     s.setLineStyle(ChartFiles.dashed());
                     s.setLineColor(java.awt.Color.GRAY);
