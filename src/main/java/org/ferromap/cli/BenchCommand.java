@@ -113,9 +113,18 @@ final class BenchCommand implements Runnable {
                 }
                 c = c.withSourcePeak(peak);
             }
-            SimulationBenchmark.Result r = hipparchus
-                    ? SimulationBenchmark.runHipparchus(c, periods, repeat, rtol)
-                    : SimulationBenchmark.run(c, periods, repeat, rtol);
+            SimulationBenchmark.Result r;
+            if (hipparchus) {
+                try {
+                    r = SimulationBenchmark.runHipparchus(c, periods, repeat, rtol);
+                } catch (RuntimeException e) {
+                    // Hipparchus throws where the lean integrator returns a status: a result, said plainly
+                    throw new FerromapException(MessageKey.INTEGRATION_FAILED,
+                            "Hipparchus's DormandPrince853Integrator failed: " + e.getMessage(), e);
+                }
+            } else {
+                r = SimulationBenchmark.run(c, periods, repeat, rtol);
+            }
             String what = s.isEquipmentForm() ? "reduced single-phase circuit (" + s.exactness().explanation() + ")"
                     : "single-phase circuit";
             BenchJson j = new BenchJson(s.title(), what, c.sourcePeak(), periods, repeat, rtol,
