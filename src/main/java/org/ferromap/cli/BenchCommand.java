@@ -57,10 +57,11 @@ final class BenchCommand implements Runnable {
 
     /** {@code ferromap bench simulate STUDY --periods N --repeat R [--rtol X] [--source Q] [--json]}. */
     @Command(name = "simulate", description = {
-        "Integrate the study's single-phase circuit from rest for N source periods with " + SimulationBenchmark.SAMPLES_PER_PERIOD
-                + " output samples a period,",
-        "R times in one warm process; print the median time and the right-hand-side evaluations.",
-        "Equipment studies use their reduced circuit. The work of the peer program gsl_circuit.c."})
+        "Integrate the study's single-phase circuit from rest for N source periods with "
+                + SimulationBenchmark.SAMPLES_PER_PERIOD + " output samples a period, R times in one warm process; "
+                + "print the median time and the right-hand-side evaluations.",
+        "Equipment studies use their reduced circuit. The same work as the peer program gsl_circuit.c "
+                + "(see docs/BENCHMARKS.md). Exit 1 when the integration fails, 2 for bad input."})
     static final class Simulate extends BaseCommand {
 
         @Parameters(index = "0", paramLabel = "STUDY", description = "Study file (YAML).")

@@ -44,11 +44,13 @@ import picocli.CommandLine.Option;
  * failure is a result (mode "undetermined" with the reason, exit 0).
  */
 @Command(name = "simulate", description = {
-    "Simulate the switching event in the time domain and classify the settled state",
-    "(normal, fundamental, subharmonic, quasi-periodic, chaotic or undetermined).",
-    "Circuit studies and --reduced run the single-phase circuit from the switching instant;",
-    "equipment studies run the full three-phase network, energized, opening the open-phase",
-    "case's poles (a; a and b) at --open-at. Charts (PNG, SVG, PDF) and CSV go to <out>/<study>/simulate."})
+    "Simulate the switching event in the time domain and classify the settled state (normal, fundamental, "
+            + "subharmonic, quasi-periodic, chaotic or undetermined).",
+    "Circuit studies and --reduced run the single-phase circuit from the switching instant; equipment studies "
+            + "run the full three-phase network, energized, opening the open-phase case's poles (a; a and b) at "
+            + "--open-at.",
+    "Charts (PNG, SVG, PDF) and CSV go to <out>/<study>/simulate. Exit 0 with a result (an integration failure "
+            + "is the result \"undetermined\"), 2 for bad input (nothing is written)."})
 final class SimulateCommand extends BaseCommand {
 
     /** Default periods of the single-phase run when the study names none (it stops once a periodic state is certified). */
