@@ -61,7 +61,8 @@ final class BenchCommand implements Runnable {
                 + SimulationBenchmark.SAMPLES_PER_PERIOD + " output samples a period, R times in one warm process; "
                 + "print the median time and the right-hand-side evaluations.",
         "Equipment studies use their reduced circuit. The same work as the peer program gsl_circuit.c "
-                + "(see docs/BENCHMARKS.md). Exit 1 when the integration fails, 2 for bad input."})
+                + "(see docs/BENCHMARKS.md). The status says how the integration ended; exit 2 for bad input, 1 when "
+                + "Hipparchus's integrator (--hipparchus) throws."})
     static final class Simulate extends BaseCommand {
 
         @Parameters(index = "0", paramLabel = "STUDY", description = "Study file (YAML).")
