@@ -19,6 +19,8 @@ import picocli.CommandLine.Command;
             PointsCommand.class,
             BranchCommand.class,
             FoldsCommand.class,
+            SimulateCommand.class,
+            BenchCommand.class,
         })
 public final class Main implements Runnable {
 
