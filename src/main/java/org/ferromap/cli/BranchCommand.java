@@ -21,7 +21,7 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** A branch of the LC balance in one parameter, by continuation, with its folds and stability. */
-@Command(name = "branch", description = {
+@Command(name = "branch", header = "Follow one steady state of the LC balance as a parameter varies, through its folds.", description = {
     "Follow the steady state of the LC balance as one parameter varies over a range (continuation through",
     "the folds), with stability, folds and branch points; chart (PNG, SVG, PDF), CSV and JSON under",
     "<out>/<study>/branch. The branch starts at the study's own value (clamped into the range) on the",

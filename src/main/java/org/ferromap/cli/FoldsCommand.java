@@ -19,7 +19,7 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** Fold curves of the single-harmonic balance in a plane of two parameters, with cusps and labelled regions. */
-@Command(name = "folds", description = {
+@Command(name = "folds", header = "Trace fold curves and cusps of the LC balance in a plane of two parameters.", description = {
     "Trace the folds of the single-harmonic LC balance in the plane of two parameters: P1 (--vary) over",
     "[--from, --to] and P2 (--and) over [--and-from, --and-to] (default: a decade centred on the study's",
     "value). Cusps are located; the regions between the curves are labelled one state, bistable or",
