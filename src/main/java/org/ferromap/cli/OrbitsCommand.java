@@ -13,7 +13,8 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** Periodic orbits continued in one parameter, with Floquet multipliers and bifurcations. */
-@Command(name = "orbits", description = {
+@Command(name = "orbits", header = "Periodic orbits continued in one parameter: Floquet multipliers, folds, period doublings, tori, pitchforks.",
+        description = {
     "Periodic orbits of the equivalent circuit continued in one parameter over a range, with their",
     "Floquet multipliers (stability) and the bifurcations on them: folds, period doublings, tori and",
     "symmetry-breaking pitchforks, switching onto the doubled and the asymmetric branches.",

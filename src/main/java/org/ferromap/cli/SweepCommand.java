@@ -22,7 +22,8 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** The brute-force bifurcation diagram: up and down sweeps carrying the state, samples once a period. */
-@Command(name = "sweep", description = {
+@Command(name = "sweep", header = "Brute-force bifurcation diagram: up and down sweeps carrying the state, sampled once a period.",
+        description = {
     "Brute-force bifurcation diagram: the circuit simulated at each of --steps values of one",
     "parameter, up through the range and back down, from each initial state, carrying the settled",
     "state from one value to the next (so hysteresis shows); after a transient the state is sampled",

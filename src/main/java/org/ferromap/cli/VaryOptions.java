@@ -8,9 +8,7 @@ import org.ferromap.errors.MessageKey;
 import org.ferromap.study.Study;
 import org.ferromap.study.StudyParameters;
 import org.ferromap.study.SweepParameter;
-import org.ferromap.units.Constants;
 import org.ferromap.units.Dimension;
-import org.ferromap.units.Form;
 import org.ferromap.units.Quantities;
 import org.ferromap.units.Quantity;
 import picocli.CommandLine.Option;
@@ -103,17 +101,7 @@ final class VaryOptions {
             }
             return q.value() * own;
         }
-        if (q.dimension() != Dimension.VOLTAGE) {
-            return q.value();
-        }
-        if (p == SweepParameter.SOURCE) {
-            if (q.form() == Form.UNSPECIFIED) {
-                throw new FerromapException(MessageKey.BAD_QUANTITY, option + " " + text
-                        + " does not say peak or rms; write e.g. '28.17 kV peak'");
-            }
-            return q.form() == Form.RMS ? q.value() * Constants.SQRT2 : q.value();
-        }
-        return q.form() == Form.PEAK ? q.value() / Constants.SQRT2 : q.value();
+        return SweepAxes.value(text, p, option); // as the branch and folds verbs read values
     }
 
     /**
