@@ -15,16 +15,16 @@ import picocli.CommandLine.Option;
 /** Periodic orbits continued in one parameter, with Floquet multipliers and bifurcations. */
 @Command(name = "orbits", header = "Periodic orbits continued in one parameter: Floquet multipliers, folds, period doublings, tori, pitchforks.",
         description = {
-    "Periodic orbits of the equivalent circuit continued in one parameter over a range, with their",
-    "Floquet multipliers (stability) and the bifurcations on them: folds, period doublings, tori and",
-    "symmetry-breaking pitchforks, switching onto the doubled and the asymmetric branches.",
-    "The orbits start from the states the circuit settles to (from --initial-states initial states,",
-    "300 source periods at --start) and from the harmonic-balance steady states (the normal,",
-    "unstable and ferroresonant period-1 orbits) at --start and at both ends of the range.",
-    "By default every period from 1 to 8 is followed.",
-    "For --vary source the folds are also compared with the single- and multi-harmonic balance.",
-    "Writes charts (PNG, SVG, PDF: the peak voltage of each orbit, and its voltage on the section",
-    "t = 0 mod T as the sweep verb draws it), CSV and JSON under <out>/<study>/orbits."})
+    "Periodic orbits of the equivalent circuit continued in one parameter over a range, with their Floquet "
+            + "multipliers (stability) and the bifurcations on them: folds, period doublings, tori and symmetry-breaking "
+            + "pitchforks, switching onto the doubled and the asymmetric branches.",
+    "The orbits start from the states the circuit settles to (from --initial-states initial states, 300 source "
+            + "periods at --start) and from the harmonic-balance steady states (the normal, unstable and ferroresonant "
+            + "period-1 orbits) at --start and at both ends of the range. By default every period from 1 to 8 is "
+            + "followed. For --vary source the folds are also compared with the single- and multi-harmonic balance.",
+    "Charts (PNG, SVG, PDF: the peak voltage of each orbit, and its voltage on the section t = 0 mod T as the sweep "
+            + "verb draws it), CSV and JSON go to <out>/<study>/orbits. Exit 0 with a result, 1 when a computation "
+            + "fails, 2 for a bad request (nothing is written)."})
 final class OrbitsCommand extends BaseCommand {
 
     /** Default count of initial states: the de-energized terminal and two spread states (a run of seconds to a minute). */
@@ -38,29 +38,28 @@ final class OrbitsCommand extends BaseCommand {
     @Mixin
     VaryOptions vary;
 
-    @Option(names = "--period", paramLabel = "K", description = {
-        "Only orbits of least period K source periods (1 to 8), without branch switching to 2K.",
-        "Default: every period from 1 to --max-period, switching at doublings and pitchforks."})
+    @Option(names = "--period", paramLabel = "K", description = "Only orbits of least period K source periods (1 to 8), "
+            + "without branch switching to 2K (default: every period from 1 to --max-period, switching at doublings and "
+            + "pitchforks).")
     Integer period;
 
-    @Option(names = "--max-period", paramLabel = "K", defaultValue = "8", description = {
-        "Largest period followed when --period is not given (1 to 8; default ${DEFAULT-VALUE}). Deep in a",
-        "period-doubling cascade the period-8 branches cost most of the run: 2 or 4 is much quicker."})
+    @Option(names = "--max-period", paramLabel = "K", defaultValue = "8", description = "Largest period followed when "
+            + "--period is not given (1 to 8; default ${DEFAULT-VALUE}). Deep in a period-doubling cascade the period-8 "
+            + "branches cost most of the run: 2 or 4 is much quicker.")
     int maxPeriod;
 
-    @Option(names = "--initial-states", paramLabel = "N", defaultValue = "" + DEFAULT_INITIAL_STATES, description = {
-        "States to settle from (1 to " + StartStates.MAX + "; default ${DEFAULT-VALUE}): the de-energized terminal, then states",
-        "spread in amplitude and phase. More find more coexisting orbits, each costs a continuation."})
+    @Option(names = "--initial-states", paramLabel = "N", defaultValue = "" + DEFAULT_INITIAL_STATES, description = "States "
+            + "to settle from (1 to " + StartStates.MAX + "; default ${DEFAULT-VALUE}): the de-energized terminal, then states "
+            + "spread in amplitude and phase. More find more coexisting orbits; each new one costs a continuation.")
     int initialStates;
 
-    @Option(names = "--max-points", paramLabel = "N", defaultValue = "" + DEFAULT_MAX_POINTS, description = {
-        "Most points per continued branch (20 to 5000; default ${DEFAULT-VALUE}). Branches of high period in a",
-        "cascade wind for long: this bounds the run time."})
+    @Option(names = "--max-points", paramLabel = "N", defaultValue = "" + DEFAULT_MAX_POINTS, description = "Most points "
+            + "per continued branch (20 to 5000; default ${DEFAULT-VALUE}). Branches of high period in a cascade wind for "
+            + "long: this bounds the run time.")
     int maxPoints;
 
-    @Option(names = "--start", paramLabel = "Q", description = {
-        "Where in the range the initial states settle (default: the study's own value when inside",
-        "the range, else the middle)."})
+    @Option(names = "--start", paramLabel = "Q", description = "Where in the range the initial states settle and the "
+            + "harmonic-balance seeds are taken (default: the study's own value when inside the range, else the middle).")
     String start;
 
     /** JSON contract of {@code orbits --json} (SI; the source voltage in V peak). */

@@ -24,16 +24,21 @@ import picocli.CommandLine.Option;
 /** The brute-force bifurcation diagram: up and down sweeps carrying the state, samples once a period. */
 @Command(name = "sweep", header = "Brute-force bifurcation diagram: up and down sweeps carrying the state, sampled once a period.",
         description = {
-    "Brute-force bifurcation diagram: the circuit simulated at each of --steps values of one",
-    "parameter, up through the range and back down, from each initial state, carrying the settled",
-    "state from one value to the next (so hysteresis shows); after a transient the state is sampled",
-    "once a source period (t = 0 mod T). With --with-orbits the continued periodic orbits and their",
-    "bifurcations are drawn over the samples. Writes a chart (PNG, SVG, PDF), CSV and JSON under",
-    "<out>/<study>/sweep."})
+    "Brute-force bifurcation diagram: the circuit simulated at each of --steps values of one parameter, up "
+            + "through the range and back down, from each initial state, carrying the settled state from one value to "
+            + "the next (so hysteresis shows); after a transient the state is sampled once a source period (t = 0 mod T).",
+    "With --with-orbits the continued periodic orbits and their bifurcations are drawn over the samples.",
+    "A chart (PNG, SVG, PDF), CSV and JSON go to <out>/<study>/sweep. Exit 0 with a result, 1 when a computation "
+            + "fails, 2 for a bad request (nothing is written)."})
 final class SweepCommand extends BaseCommand {
 
     /** Most values a sweep accepts: beyond this the runs take hours and the chart shows no more. */
     static final int MAX_STEPS = 2000;
+    /**
+     * Most source periods a sweep may simulate in all (runs times transients and samples): about two
+     * hundred times the default request; beyond it a run takes hours, which is a request to reconsider.
+     */
+    static final long MAX_PERIODS = 50_000_000L;
     /** Samples counted as equal for the period column, per unit of the rated flux and voltage (far above the 1e-9 integration tolerance, far below the split of a doubled orbit a step past the doubling). */
     static final double PERIOD_TOLERANCE = 1e-4;
 
@@ -46,32 +51,31 @@ final class SweepCommand extends BaseCommand {
     @Option(names = "--steps", required = true, paramLabel = "N", description = "Parameter values, both ends included (2 to " + MAX_STEPS + ").")
     int steps;
 
-    @Option(names = "--initial-states", paramLabel = "N", defaultValue = "" + OrbitsCommand.DEFAULT_INITIAL_STATES, description = {
-        "Initial states, each swept up and down (1 to " + StartStates.MAX + "; default ${DEFAULT-VALUE}): the de-energized",
-        "terminal, then states spread in amplitude and phase."})
+    @Option(names = "--initial-states", paramLabel = "N", defaultValue = "" + OrbitsCommand.DEFAULT_INITIAL_STATES,
+            description = "Initial states, each swept up and down (1 to " + StartStates.MAX + "; default ${DEFAULT-VALUE}): "
+                    + "the de-energized terminal, then states spread in amplitude and phase.")
     int initialStates;
 
-    @Option(names = "--transient", paramLabel = "PERIODS", defaultValue = "300", description = {
-        "Source periods discarded at each value after the first of a run (default ${DEFAULT-VALUE}); near a",
-        "bifurcation the approach is slow, so raise it to sharpen the diagram there."})
+    @Option(names = "--transient", paramLabel = "PERIODS", defaultValue = "300", description = "Source periods discarded "
+            + "at each value after the first of a run (0 to 100000; default ${DEFAULT-VALUE}); near a bifurcation the "
+            + "approach is slow, so raise it to sharpen the diagram there.")
     int transientPeriods;
 
-    @Option(names = "--first-transient", paramLabel = "PERIODS", defaultValue = "500", description =
-        "Source periods discarded at the first value of each run, from the initial state (default ${DEFAULT-VALUE}).")
+    @Option(names = "--first-transient", paramLabel = "PERIODS", defaultValue = "500", description = "Source periods "
+            + "discarded at the first value of each run, from the initial state (0 to 100000; default ${DEFAULT-VALUE}).")
     int firstTransient;
 
     @Option(names = "--samples", paramLabel = "PERIODS", defaultValue = "32", description =
         "Samples kept per value, one a source period (1 to 4096; default ${DEFAULT-VALUE}).")
     int samples;
 
-    @Option(names = "--threads", paramLabel = "N", description = {
-        "Worker threads, 1 to 64 (default: the processors available, at most one per run).",
-        "Runs are independent: any count gives the same result."})
+    @Option(names = "--threads", paramLabel = "N", description = "Worker threads, 1 to 64 (default: the processors "
+            + "available, at most one per run). Runs are independent: any count gives the same result.")
     Integer threads;
 
-    @Option(names = "--with-orbits", description = {
-        "Also continue the periodic orbits over the range (as the orbits verb, periods 1 to 8, settled",
-        "at the lower end of the range, where the upward runs start) and draw them with their bifurcations over the samples."})
+    @Option(names = "--with-orbits", description = "Also continue the periodic orbits over the range (as the orbits "
+            + "verb, periods 1 to 8, settled at the lower end of the range, where the upward runs start) and draw them "
+            + "with their bifurcations over the samples.")
     boolean withOrbits;
 
     /** JSON contract of {@code sweep --json} (SI; the source voltage in V peak). */
@@ -115,6 +119,12 @@ final class SweepCommand extends BaseCommand {
         }
         if (threads != null && (threads < 1 || threads > 64)) {
             throw new FerromapException(MessageKey.OUT_OF_RANGE, "--threads " + threads + " is not allowed; expected 1 to 64");
+        }
+        long work = 2L * initialStates * (firstTransient + (long) (steps - 1) * transientPeriods + (long) steps * samples);
+        if (work > MAX_PERIODS) {
+            throw new FerromapException(MessageKey.TOO_LARGE, "the sweep would simulate " + work + " source periods (2 runs per "
+                    + "initial state, transients and samples at each value); at most " + MAX_PERIODS
+                    + " are accepted: fewer --steps, --initial-states, --transient or --samples");
         }
         Study s = study.read();
         VaryOptions.Range range = vary.resolve(s);

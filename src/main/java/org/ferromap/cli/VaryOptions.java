@@ -29,14 +29,13 @@ final class VaryOptions {
             SweepParameter.SHUNT_CAPACITANCE, SweepParameter.CORE_LOSS_RESISTANCE, SweepParameter.LOAD_RESISTANCE,
             SweepParameter.CABLE_LENGTH, SweepParameter.SOURCE_LINE_VOLTAGE, SweepParameter.NO_LOAD_LOSS);
 
-    @Option(names = "--vary", required = true, paramLabel = "PARAM", description = {
-        "Parameter to vary: source, series-capacitance, shunt-capacitance, core-loss-resistance,",
-        "load-resistance; for equipment studies also cable-length, source-line-voltage, no-load-loss."})
+    @Option(names = "--vary", required = true, paramLabel = "PARAM", description = "Parameter to vary: source, "
+            + "series-capacitance, shunt-capacitance, core-loss-resistance, load-resistance; for equipment studies also "
+            + "cable-length, source-line-voltage, no-load-loss.")
     String vary;
 
-    @Option(names = "--from", required = true, paramLabel = "Q", description = {
-        "One end of the range, e.g. '20 kV peak', '0.1 uF', '500 m'; a plain number or 'pu' is per",
-        "unit of the study's own value (source voltages must say peak or rms)."})
+    @Option(names = "--from", required = true, paramLabel = "Q", description = "One end of the range, e.g. '20 kV peak', "
+            + "'0.1 uF', '500 m' (the source must say peak or rms); a plain number or 'pu' is per unit of the study's own value.")
     String from;
 
     @Option(names = "--to", required = true, paramLabel = "Q", description = "The other end of the range, same kinds as --from.")

@@ -49,6 +49,8 @@ class OrbitRequestsTest {
                         "--steps"),
                 Arguments.of("absurd steps",
                         List.of("sweep", "--vary", "source", "--from", "4 V peak", "--to", "5 V peak", "--steps", "1000000"), "--steps"),
+                Arguments.of("hours of work", List.of("sweep", "--vary", "source", "--from", "4 V peak", "--to", "5 V peak",
+                        "--steps", "2000", "--initial-states", "16", "--transient", "5000"), "source periods"),
                 Arguments.of("no initial state", List.of("sweep", "--vary", "source", "--from", "4 V peak", "--to", "5 V peak",
                         "--steps", "5", "--initial-states", "0"), "--initial-states"),
                 Arguments.of("threads", List.of("sweep", "--vary", "source", "--from", "4 V peak", "--to", "5 V peak", "--steps", "5",
