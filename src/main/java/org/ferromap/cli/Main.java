@@ -12,7 +12,22 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         versionProvider = Main.Version.class,
         description = "Maps where a cable-fed transformer with open phases is safe from ferroresonance.",
-        subcommands = {CommandLine.HelpCommand.class, CheckCommand.class, CurveCommand.class, PointsCommand.class, LimitsCommand.class, CompareCommand.class, DampingCommand.class, OddsCommand.class})
+        subcommands = {
+            CommandLine.HelpCommand.class,
+            CheckCommand.class,
+            CurveCommand.class,
+            PointsCommand.class,
+            BranchCommand.class,
+            FoldsCommand.class,
+            SimulateCommand.class,
+            BenchCommand.class,
+            OrbitsCommand.class,
+            SweepCommand.class,
+            LimitsCommand.class,
+            CompareCommand.class,
+            DampingCommand.class,
+            OddsCommand.class,
+        })
 public final class Main implements Runnable {
 
     /** Exit code for success. */

@@ -26,7 +26,7 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** Every steady state of the single-harmonic balance at the study's source voltage, the folds and the margin. */
-@Command(name = "points", description = {
+@Command(name = "points", header = "Steady states, folds and jump margin of the LC balance at the study voltage.", description = {
     "Operating points of the LC balance at the study's source voltage (the graphical method):",
     "every steady state with its stability and kind, the jump-up and jump-down folds in source",
     "voltage, the margin to the jump, and for equipment studies the critical cable length.",
