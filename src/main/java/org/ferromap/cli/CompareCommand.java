@@ -21,14 +21,14 @@ import picocli.CommandLine.Option;
 import picocli.CommandLine.Parameters;
 
 /** Two or more core designs for one rating, side by side and ranked. */
-@Command(name = "compare", description = {
-    "Compare core designs for one rating, side by side and ranked.",
-    "Core designs: studies that differ in their core data (curve, exciting current, loss).",
-    "The magnetizing curves overlaid, the margin to the jump, the fold-based cable-length limits,",
-    "the damping load needed, overvoltage maps on the same axes and colour scale, and a ranking",
-    "with its reasons. Map axes: cable length (5 m to twice the installed) x supply (0.8 to 1.2),",
-    "or the first study's map section with --use-map.",
-    "Writes charts (PNG, SVG, PDF), CSV and JSON under <out>/<first study>/compare."})
+@Command(name = "compare", header = "Compare core designs for one rating, side by side and ranked.",
+        description = {
+    "Studies that differ in their core data (curve, exciting current, loss): the magnetizing curves overlaid, the "
+            + "margin to the jump, the fold-based cable-length limits, the damping load needed, overvoltage maps on the "
+            + "same axes and colour scale (cable length 5 m to twice the installed x supply 0.8 to 1.2, or the first "
+            + "study's map section with --use-map), and a ranking with its reasons.",
+    "Charts (PNG, SVG, PDF), CSV and JSON go to <out>/<first study>/compare. Exit 0 with a result, 1 when a "
+            + "computation fails, 2 for a bad study or request (nothing is written)."})
 final class CompareCommand extends BaseCommand {
 
     @Parameters(arity = "2..*", paramLabel = "STUDY", description = "Two or more study files (YAML), equipment form.")

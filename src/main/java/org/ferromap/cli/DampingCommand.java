@@ -17,13 +17,15 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** The smallest damping load that removes the risky region, confirmed in the time domain; the arrester's duty. */
-@Command(name = "damping", description = {
-    "Size the smallest damping load that removes the risk; an arrester's energy duty.",
-    "Sizes the smallest resistive load (or damping resistor) that removes bistability at a cable",
-    "length and voltage (the cusp condition), confirm it by simulating switching events with the",
-    "load (raising it stepwise while any event ends ferroresonant), and assess a metal-oxide",
-    "arrester's energy during the worst event. Settings: the study's analyses.damping block, then",
-    "these options. Writes charts (PNG, SVG, PDF), CSV and JSON under <out>/<study>/damping."})
+@Command(name = "damping", header = "Size the smallest damping load that removes the risk; an arrester's energy duty.",
+        description = {
+    "The smallest resistive load (or damping resistor) that removes bistability at a cable length and voltage, "
+            + "from the cusp condition, confirmed by simulating switching events with the load and raised stepwise while "
+            + "any ends subharmonic, chaotic or fundamental; and the energy a metal-oxide arrester on the open phase "
+            + "absorbs during the worst event, against its rating. Settings: the study's analyses.damping block, then "
+            + "these options.",
+    "Charts (PNG, SVG, PDF), CSV and JSON go to <out>/<study>/damping. Exit 0 with a result, 1 when a computation "
+            + "fails, 2 for a bad study or request (nothing is written)."})
 final class DampingCommand extends BaseCommand {
 
     @Mixin

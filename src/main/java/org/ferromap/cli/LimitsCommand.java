@@ -13,13 +13,15 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** Cable-length limit tables over ratings, connections, cables, voltage classes and open-phase cases. */
-@Command(name = "limits", description = {
-    "Cable-length limit table per rating, connection, cable, voltage class and open-phase case.",
-    "Table: for every rating x connection x cable x voltage class x open-phase case",
-    "of the study's analyses.limits block (default: ratings around the study's, its connection, cable",
-    "and voltage, one and two open phases), the longest cable with no ferroresonant state at rated",
-    "voltage and at the margins (1.0, 1.05, 1.1 pu), from the folds; the linear criterion beside it.",
-    "Writes a chart (PNG, SVG, PDF), CSV and JSON under <out>/<study>/limits."})
+@Command(name = "limits", header = "Cable-length limit table per rating, connection, cable, voltage class and open-phase case.",
+        description = {
+    "For every rating x primary connection x cable x voltage class x open-phase case of the study's analyses.limits "
+            + "block (by default: the study's rating x 0.25, 0.5, 1 and 2, its connection, cable and voltage, one and two "
+            + "open phases), the longest cable with no ferroresonant steady state at rated voltage and at the margins "
+            + "(1.0, 1.05 and 1.1 pu), from the folds of the balance, with the linear criterion (K = 40 by default) and the "
+            + "loop's linear resonance beside it. Typical data per rating are named with their sources (docs/DELIVERABLES.md).",
+    "Chart (PNG, SVG, PDF), CSV and JSON go to <out>/<study>/limits. Exit 0 with a table, 1 when a computation "
+            + "fails, 2 for a bad study or request (nothing is written)."})
 final class LimitsCommand extends BaseCommand {
 
     @Mixin

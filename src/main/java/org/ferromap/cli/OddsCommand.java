@@ -18,12 +18,14 @@ import picocli.CommandLine.Mixin;
 import picocli.CommandLine.Option;
 
 /** The probability of ferroresonance over random switching instants and residual flux. */
-@Command(name = "odds", description = {
-    "Probability of ferroresonance over random switching instants and residual flux.",
-    "Monte Carlo over random switching instants and residual flux,",
-    "reproducible for a seed and the same for any thread count, with a confidence interval and the",
-    "runs needed for a precision. Settings: the study's analyses.odds block, then these options.",
-    "Writes charts (PNG, SVG, PDF), CSV and JSON under <out>/<study>/odds."})
+@Command(name = "odds", header = "Probability of ferroresonance over random switching instants and residual flux.",
+        description = {
+    "Monte Carlo over the switching instant and the residual flux, the same for a seed whatever the thread count, "
+            + "with a confidence interval (Clopper-Pearson or Wilson) and the runs needed for a precision; with "
+            + "--precision, runs are added up to that number. Settings: the study's analyses.odds block, then these "
+            + "options.",
+    "Charts (PNG, SVG, PDF), CSV and JSON go to <out>/<study>/odds. Exit 0 with a result, 1 when a computation "
+            + "fails, 2 for a bad study or request (nothing is written)."})
 final class OddsCommand extends BaseCommand {
 
     @Mixin

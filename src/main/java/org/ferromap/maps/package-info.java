@@ -14,6 +14,14 @@
  * <p>The engine does not depend on the physics: balance and time-domain cells are plugged in as
  * cell functions by the layers above.
  *
- * <p>May use: balance, continuation, dynamics, orbits, circuit, equipment, units, errors.
+ * <p>The users' deliverables are computed here too, on the same executors (docs/DELIVERABLES.md):
+ * cable-length limit tables ({@link org.ferromap.maps.LimitTable}, {@link org.ferromap.maps.FoldLimit}),
+ * core comparisons ({@link org.ferromap.maps.CoreComparison}), damping sizing and arrester duty
+ * ({@link org.ferromap.maps.DampingSizing}, {@link org.ferromap.maps.ArresterDuty}) and the probability of
+ * ferroresonance ({@link org.ferromap.maps.SwitchingOdds}, {@link org.ferromap.maps.BinomialInterval}),
+ * with {@link org.ferromap.maps.IndexedRuns} for independent jobs and
+ * {@link org.ferromap.maps.SwitchingEnsemble} for fixed sets of switching events.
+ *
+ * <p>May use: balance, continuation, dynamics, orbits, circuit, equipment, study, units, errors.
  */
 package org.ferromap.maps;
