@@ -35,7 +35,7 @@ import org.hipparchus.exception.MathRuntimeException;
  * </ul>
  * For curves without closed forms the folds themselves decide: the cusp condition only gives a
  * first guess, and the start of the lasting bistable region is found on the fold scan (a fine
- * geometric ladder down from twice the guess, then bisection to relative 1e-7). This steps over
+ * geometric ladder down from four times the guess, then bisection to relative 1e-7). This steps over
  * narrow windows of bistability that close again (interpolated table curves make them between
  * coarse points, where the two states differ little; numerical cusp conditions find them or not
  * depending on their grid) and over disagreements between the cusp condition and the fold scan
@@ -238,14 +238,14 @@ public final class FoldLimit {
 
     /**
      * Where the lasting bistable region begins: {length, birth voltage}, or null when no pair exists
-     * up to the longest length. From a length at least twice the guess with a fold pair, the
+     * up to the longest length. From a length {@link #START} times the guess (or further, to a fold pair), the
      * highest-flux pair is followed down a fine geometric ladder (ratio {@link #FINE}), each rung
      * taking the pair whose jump-down flux is nearest the previous one, until that pair is gone;
      * then bisection to relative {@link #CUSP_BISECTION}. So windows of bistability at lower flux
      * (other pairs, which may come and go or overlap it) do not move the limit.
      */
     private double[] mainCusp(DoubleFunction<EquivalentCircuit> at, double guess) {
-        double hi = 2 * guess;
+        double hi = Math.min(START * guess, maxLength);
         Pair p = last(at, hi);
         while (p == null) {
             hi *= LADDER;
@@ -281,6 +281,9 @@ public final class FoldLimit {
         }
         return new double[] {b, 0.5 * (pb.upSource() + pb.downSource())};
     }
+
+    /** How far above the cusp condition's guess the walk down starts: windows below it reaching that far are stepped over. */
+    static final double START = 4.0;
 
     /** Largest factor between the jump-down fluxes of one pair on neighbouring rungs: the fluxes move a few percent per rung. */
     static final double TRACK = 1.15;
