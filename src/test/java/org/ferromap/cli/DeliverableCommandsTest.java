@@ -168,6 +168,30 @@ class DeliverableCommandsTest {
         assertTrue(Files.exists(dir.resolve("odds-runs.csv")));
     }
 
+    /**
+     * The notebook's entry: each analysis a study lists runs with the settings written there, the
+     * comparison reading its other designs relative to the study's folder.
+     */
+    @Test
+    void sectionsRunFromTheStudysAnalyses() throws Exception {
+        equipment("other", 0.5, "");
+        Path s = equipment("main", 1.0, "analyses:\n  compare: {with: other.yaml, steps: [3, 2]}\n  limits: {ratings: [500 kVA]}");
+        var study = org.ferromap.study.StudyReader.read(s);
+        var nb = new org.ferromap.report.Notebook("sections");
+        Path dir = Files.createDirectories(tmp.resolve("nb"));
+        var ex = new org.ferromap.maps.LocalPoolExecutor(2);
+        var cmp = (org.ferromap.maps.ComparisonResult) DeliverableSections.section("compare", study, ex, dir, nb);
+        assertEquals(2, cmp.designs().size());
+        assertEquals("other", cmp.designs().get(1).name());
+        var lim = (org.ferromap.maps.LimitTableResult) DeliverableSections.section("limits", study, ex, dir, nb);
+        assertEquals(2, lim.rows().size(), "one rating, both open-phase cases by default");
+        assertTrue(Files.exists(dir.resolve("compare.json")) && Files.exists(dir.resolve("limits.json")));
+        Path noWith = equipment("alone", 1.0, "analyses:\n  compare:");
+        assertEquals(org.ferromap.errors.MessageKey.MISSING_KEY, org.junit.jupiter.api.Assertions.assertThrows(
+                org.ferromap.errors.FerromapException.class, () -> DeliverableSections.section("compare",
+                        org.ferromap.study.StudyReader.read(noWith), ex, dir, null)).key());
+    }
+
     /** Bad input of every kind exits 2 with the reason and writes nothing. */
     @Test
     void badInputExitsTwoAndWritesNothing() throws Exception {
