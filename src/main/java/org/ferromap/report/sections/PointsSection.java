@@ -1,0 +1,176 @@
+package org.ferromap.report.sections;
+
+import java.nio.file.Path;
+import java.util.ArrayList;
+import java.util.List;
+import org.ferromap.balance.CuspCondition;
+import org.ferromap.balance.Fold;
+import org.ferromap.balance.FoldMargin;
+import org.ferromap.balance.OperatingPoint;
+import org.ferromap.balance.PointKind;
+import org.ferromap.circuit.EquivalentCircuit;
+import org.ferromap.report.ChartFiles;
+import org.ferromap.report.Csv;
+import org.ferromap.report.Json;
+import org.ferromap.report.Notebook;
+import org.knowm.xchart.XYChart;
+import org.knowm.xchart.XYSeries;
+import org.knowm.xchart.style.markers.SeriesMarkers;
+
+/**
+ * Operating points at the study's source: every steady state of the balance, the folds, the
+ * margin to the jump and the cusp condition, with the graphical method's picture: the
+ * magnetizing branch's fundamental V-I curve against the capacitor line.
+ */
+public final class PointsSection {
+
+    private PointsSection() {
+    }
+
+    /**
+     * What the section shows.
+     *
+     * @param circuit       the circuit
+     * @param points        its steady states, ascending in flux
+     * @param folds         its folds in source voltage
+     * @param margin        distance to the jump-up fold
+     * @param cusp          the cusp condition
+     * @param curveCurrent  fundamental magnetizing current I1 at sampled flux amplitudes, A peak (ascending, from 0)
+     * @param curveVoltage  the terminal voltage w Lambda at the same samples, V peak
+     */
+    public record Data(EquivalentCircuit circuit, List<OperatingPoint> points, List<Fold> folds, FoldMargin margin,
+            CuspCondition cusp, double[] curveCurrent, double[] curveVoltage) { }
+
+    /** One steady state in points.json / points.csv. */
+    public record PointJson(String kind, boolean stable, double terminalVoltage, double terminalVoltagePu, double flux,
+            double current, double phaseDeg, boolean capacitive) { }
+
+    /** One fold in points.json. */
+    public record FoldJson(String direction, double sourcePeak, double sourcePu, double flux, double terminalVoltage) { }
+
+    /** points.json. */
+    public record PointsJson(double sourcePeak, List<PointJson> points, List<FoldJson> folds, FoldMargin margin,
+            CuspCondition cusp) { }
+
+    public static void write(Notebook nb, Path notebook, Data d) {
+        EquivalentCircuit c = d.circuit();
+        nb.section("points", "Operating points at the study's source");
+        nb.text("Every single-harmonic steady state at E = " + Fmt.si(c.sourcePeak(), "V") + " peak ("
+                + Fmt.pu(c.sourcePeak() / c.ratedPeak()) + "). Stable points are where the source rises with the flux "
+                + "along the branch; the unstable middle point separates the basins of the other two.");
+        List<List<String>> rows = new ArrayList<>();
+        List<PointJson> pj = new ArrayList<>();
+        int k = 1;
+        for (OperatingPoint p : d.points()) {
+            rows.add(List.of(String.valueOf(k++), p.kind().label() + (p.atFold() ? " (at a fold)" : ""), p.stable() ? "yes" : "no",
+                    Fmt.si(p.voltage(), "V"), Fmt.pu(p.voltagePerUnit()), Fmt.sig(p.flux(), 4) + " Wb-turn",
+                    Fmt.si(p.current(), "A"), Fmt.deg(p.voltagePhase()), p.capacitive() ? "capacitive" : "inductive"));
+            pj.add(new PointJson(p.kind().label(), p.stable(), p.voltage(), p.voltagePerUnit(), p.flux(), p.current(),
+                    Math.toDegrees(p.voltagePhase()), p.capacitive()));
+        }
+        nb.table(List.of("#", "kind", "stable", "terminal voltage (peak)", "per unit", "flux (peak)", "current I1 (peak)",
+                "phase to source", "loop"), rows);
+        List<List<String>> frows = new ArrayList<>();
+        List<FoldJson> fj = new ArrayList<>();
+        for (Fold f : d.folds()) {
+            frows.add(List.of(f.direction().label(), Fmt.si(f.sourcePeak(), "V"), Fmt.pu(f.sourcePerUnit()),
+                    Fmt.sig(f.flux(), 4) + " Wb-turn", Fmt.si(f.voltage(), "V")));
+            fj.add(new FoldJson(f.direction().label(), f.sourcePeak(), f.sourcePerUnit(), f.flux(), f.voltage()));
+        }
+        if (frows.isEmpty()) {
+            nb.text("The branch has no fold: one steady state at every source voltage.");
+        } else {
+            nb.text("Folds of the branch in source voltage:");
+            nb.table(List.of("fold", "source (peak)", "per unit", "flux (peak)", "terminal voltage (peak)"), frows);
+        }
+        FoldMargin m = d.margin();
+        nb.text("Margin: " + m.note() + (m.hasFold() ? "; jump-up fold at " + Fmt.si(m.jumpUpSourcePeak(), "V") + " = "
+                + Fmt.sig(m.ratio(), 4) + " times the source" : "") + ".");
+        CuspCondition cu = d.cusp();
+        nb.text("Cusp condition: " + (cu.bistable() ? "bistable" : "not bistable") + "; minimum capacitance for a fold pair "
+                + Fmt.si(cu.minimumCapacitance(), "F") + " (C/C_min = " + Fmt.sig(cu.capacitanceRatio(), 4)
+                + "); shunt conductance that removes the fold pair " + Fmt.si(cu.dampingConductance(), "S")
+                + (cu.dampingConductance() > 0 ? " (" + Fmt.si(1 / cu.dampingConductance(), "Ohm") + ")" : "") + ".");
+        Path dir = Figures.folder(notebook, "points");
+        List<List<?>> prow = new ArrayList<>();
+        for (PointJson p : pj) {
+            prow.add(List.of(p.kind(), p.stable(), p.terminalVoltage(), p.terminalVoltagePu(), p.flux(), p.current(),
+                    p.phaseDeg(), p.capacitive()));
+        }
+        Csv.write(dir.resolve("points.csv"), List.of("kind", "stable", "terminal voltage (V peak)", "terminal voltage (pu)",
+                "flux (Wb-turn peak)", "current I1 (A peak)", "phase to source (deg)", "capacitive"), prow);
+        Json.write(new PointsJson(c.sourcePeak(), pj, fj, m, cu), dir.resolve("points.json"));
+        graphical(nb, notebook, d);
+        nb.end();
+    }
+
+    /** The V-I picture: odd fundamental curve of the branch, the capacitor line V = E Cs/C + I/(w C), the points on it. */
+    private static void graphical(Notebook nb, Path notebook, Data d) {
+        EquivalentCircuit c = d.circuit();
+        double cap = c.totalCapacitance();
+        double eth = c.sourcePeak() * c.seriesCapacitance() / cap;
+        double xc = 1 / (c.omega() * cap);
+        int n = d.curveCurrent().length;
+        double[] ci = new double[2 * n - 1];
+        double[] cv = new double[2 * n - 1];
+        for (int i = 0; i < n; i++) {
+            ci[n - 1 + i] = d.curveCurrent()[i];
+            cv[n - 1 + i] = d.curveVoltage()[i] / 1e3;
+            ci[n - 1 - i] = -d.curveCurrent()[i];
+            cv[n - 1 - i] = -d.curveVoltage()[i] / 1e3;
+        }
+        double iMax = d.curveCurrent()[n - 1];
+        double[] li = {-iMax, iMax};
+        double[] lv = {(eth - xc * iMax) / 1e3, (eth + xc * iMax) / 1e3};
+        XYChart ch = ChartFiles.xyChart("Graphical method", "fundamental magnetizing current I1 (A peak)",
+                "terminal voltage (kV peak)");
+        XYSeries curve = ch.addSeries("magnetizing branch, fundamental", ci, cv);
+        curve.setMarker(SeriesMarkers.NONE);
+        curve.setLineStyle(ChartFiles.solid());
+        XYSeries line = ch.addSeries("capacitor line V = E Cs/C + I/(w C)", li, lv);
+        line.setMarker(SeriesMarkers.NONE);
+        line.setLineStyle(ChartFiles.dashed());
+        List<double[]> pts = new ArrayList<>();
+        for (PointKind kind : PointKind.values()) {
+            List<Double> xs = new ArrayList<>();
+            List<Double> ys = new ArrayList<>();
+            for (OperatingPoint p : d.points()) {
+                if (p.kind() == kind) {
+                    double sign = p.capacitive() ? -1 : 1;
+                    xs.add(sign * p.current());
+                    ys.add(sign * p.voltage() / 1e3);
+                    pts.add(new double[] {sign * p.current(), sign * p.voltage()});
+                }
+            }
+            if (!xs.isEmpty()) {
+                ChartFiles.markers(ch, kind.label() + " point", xs.stream().mapToDouble(Double::doubleValue).toArray(),
+                        ys.stream().mapToDouble(Double::doubleValue).toArray(),
+                        ChartFiles.PALETTE[2 + kind.ordinal()]);
+            }
+        }
+        ch.getStyler().setLegendPosition(org.knowm.xchart.style.Styler.LegendPosition.InsideSE);
+        List<List<?>> rows = new ArrayList<>();
+        for (int i = 0; i < ci.length; i++) {
+            rows.add(List.of("curve", ci[i], cv[i] * 1e3));
+        }
+        rows.add(List.of("line", li[0], lv[0] * 1e3));
+        rows.add(List.of("line", li[1], lv[1] * 1e3));
+        for (double[] p : pts) {
+            rows.add(List.of("point", p[0], p[1]));
+        }
+        record Picture(double[] curveCurrent, double[] curveVoltage, double theveninSource, double capacitorReactance) { }
+        Figures.xy(nb, notebook, "points", "graphical-method", ch, "The graphical method: the magnetizing branch's "
+                + "fundamental V-I curve (odd) against the capacitor line; each crossing is a steady state (points drawn "
+                + "where the balance puts them, capacitive ones mirrored into the third quadrant). The line leaves out the "
+                + "loss, which the points include.", List.of("series", "current (A peak)", "voltage (V peak)"), rows,
+                new Picture(ci, scale(cv, 1e3), eth, xc));
+    }
+
+    private static double[] scale(double[] v, double f) {
+        double[] o = new double[v.length];
+        for (int i = 0; i < v.length; i++) {
+            o[i] = v[i] * f;
+        }
+        return o;
+    }
+}
