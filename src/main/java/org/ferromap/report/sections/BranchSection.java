@@ -86,6 +86,7 @@ public final class BranchSection {
         study.setLineStyle(ChartFiles.dashed());
         study.setLineColor(java.awt.Color.GRAY);
         ch.getStyler().setLegendPosition(org.knowm.xchart.style.Styler.LegendPosition.InsideNW);
+        ch.getStyler().setXAxisLogarithmic(!d.traced() && logWorthy(d.x()));
         double[] st = new double[d.x().length];
         for (int i = 0; i < st.length; i++) {
             st[i] = d.stable()[i] ? 1 : 0;
@@ -106,5 +107,19 @@ public final class BranchSection {
             }
         }
         return new double[] {lo, hi > 0 ? hi : 1};
+    }
+
+    /** Positive values spanning more than a decade read better on a log axis. */
+    private static boolean logWorthy(double[] x) {
+        double lo = Double.POSITIVE_INFINITY;
+        double hi = 0;
+        for (double v : x) {
+            if (!(v > 0)) {
+                return false;
+            }
+            lo = Math.min(lo, v);
+            hi = Math.max(hi, v);
+        }
+        return x.length > 0 && hi / lo > 10;
     }
 }

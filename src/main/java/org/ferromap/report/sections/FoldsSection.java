@@ -33,9 +33,13 @@ public final class FoldsSection {
      * @param sourcePu    the study's source, pu
      * @param cuspQ       the parameter value where the fold pair is born (NaN when not found in the range)
      * @param cuspSourcePu the source there, pu
+     * @param logQ        whether the parameter axis is logarithmic
+     * @param foldFreeConductance total shunt conductance at which the study's fold pair vanishes, S
+     * @param conductance the study's shunt conductance, S
      */
     public record Data(List<Fold> folds, CuspCondition cusp, String parameter, String unit, double[] q, double[] upPu,
-            double[] downPu, double studyValue, double sourcePu, double cuspQ, double cuspSourcePu, boolean logQ) { }
+            double[] downPu, double studyValue, double sourcePu, double cuspQ, double cuspSourcePu, boolean logQ,
+            double foldFreeConductance, double conductance) { }
 
     public static void write(Notebook nb, Path notebook, Data d) {
         nb.section("folds", "Folds and cusp");
@@ -52,7 +56,8 @@ public final class FoldsSection {
         CuspCondition c = d.cusp();
         nb.text("Bistability needs a total capacitance above C_min = " + Fmt.si(c.minimumCapacitance(), "F")
                 + " (the study has " + Fmt.sig(c.capacitanceRatio(), 4) + " times that); a total shunt conductance of "
-                + Fmt.si(c.dampingConductance(), "S") + " or more removes the fold pair. "
+                + Fmt.si(d.foldFreeConductance(), "S") + " or more removes the fold pair (the study has "
+                + Fmt.si(d.conductance(), "S") + "). "
                 + (Double.isNaN(d.cuspQ()) ? "The fold pair does not end inside the " + d.parameter() + " range drawn."
                         : "In " + d.parameter() + " the fold pair is born at " + Fmt.sig(d.cuspQ(), 4) + " " + d.unit()
                         + " with the folds at " + Fmt.pu(d.cuspSourcePu()) + " of source (the cusp)."));

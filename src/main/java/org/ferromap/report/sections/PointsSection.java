@@ -35,11 +35,12 @@ public final class PointsSection {
      * @param folds         its folds in source voltage
      * @param margin        distance to the jump-up fold
      * @param cusp          the cusp condition
+     * @param foldFreeConductance total shunt conductance at which the fold pair vanishes, S (NaN when not found)
      * @param curveCurrent  fundamental magnetizing current I1 at sampled flux amplitudes, A peak (ascending, from 0)
      * @param curveVoltage  the terminal voltage w Lambda at the same samples, V peak
      */
     public record Data(EquivalentCircuit circuit, List<OperatingPoint> points, List<Fold> folds, FoldMargin margin,
-            CuspCondition cusp, double[] curveCurrent, double[] curveVoltage) { }
+            CuspCondition cusp, double foldFreeConductance, double[] curveCurrent, double[] curveVoltage) { }
 
     /** One steady state in points.json / points.csv. */
     public record PointJson(String kind, boolean stable, double terminalVoltage, double terminalVoltagePu, double flux,
@@ -89,8 +90,9 @@ public final class PointsSection {
         CuspCondition cu = d.cusp();
         nb.text("Cusp condition: " + (cu.bistable() ? "bistable" : "not bistable") + "; minimum capacitance for a fold pair "
                 + Fmt.si(cu.minimumCapacitance(), "F") + " (C/C_min = " + Fmt.sig(cu.capacitanceRatio(), 4)
-                + "); shunt conductance that removes the fold pair " + Fmt.si(cu.dampingConductance(), "S")
-                + (cu.dampingConductance() > 0 ? " (" + Fmt.si(1 / cu.dampingConductance(), "Ohm") + ")" : "") + ".");
+                + "); total shunt conductance that removes the fold pair " + Fmt.si(d.foldFreeConductance(), "S")
+                + (d.foldFreeConductance() > 0 ? " (" + Fmt.si(1 / d.foldFreeConductance(), "Ohm") + " in all)" : "")
+                + ", the circuit has " + Fmt.si(d.circuit().conductance(), "S") + ".");
         Path dir = Figures.folder(notebook, "points");
         List<List<?>> prow = new ArrayList<>();
         for (PointJson p : pj) {

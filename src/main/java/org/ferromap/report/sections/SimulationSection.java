@@ -77,6 +77,7 @@ public final class SimulationSection {
         }
         XYChart ch = ChartFiles.xyChart(title + ": " + r.mode().label(), "time since switching (ms)",
                 "terminal voltage (pu of rated peak)");
+        ch.getStyler().setXAxisDecimalPattern("0.#");
         XYSeries s = ch.addSeries(r.mode().label(), t, v);
         s.setMarker(SeriesMarkers.NONE);
         s.setLineStyle(ChartFiles.solid());
