@@ -70,7 +70,7 @@ public final class BalanceCell implements CellFunction {
         out[offset + 1] = Double.NaN;
         List<OperatingPoint> points;
         try {
-            points = balance.operatingPoints(plane.circuit(x, y));
+            points = balance.operatingPoints(plane.balanceCircuit(x, y));
         } catch (FerromapException e) {
             return; // a point where the balance fails is drawn as "no data", never stops the map
         }

@@ -227,7 +227,7 @@ public final class FoldBoundaries {
     /** Whether the circuit at scaled point (u, v) has a fold pair. */
     private boolean bistable(double u, double v) {
         try {
-            return cell.balance().folds(cell.plane().circuit(unscale(xa, u), unscale(ya, v))).size() >= 2;
+            return cell.balance().folds(cell.plane().balanceCircuit(unscale(xa, u), unscale(ya, v))).size() >= 2;
         } catch (FerromapException e) {
             return false;
         }
@@ -346,7 +346,7 @@ public final class FoldBoundaries {
     /** E_fold / E - 1 at a line point, from the folds on its side with a fold pair; NaN when unavailable. */
     private double h(double[] linePoint, double du, double dv) {
         try {
-            var c = cell.plane().circuit(unscale(xa, linePoint[2] * du), unscale(ya, linePoint[3] * dv));
+            var c = cell.plane().balanceCircuit(unscale(xa, linePoint[2] * du), unscale(ya, linePoint[3] * dv));
             var folds = cell.balance().folds(c);
             if (folds.size() < 2 || !(c.sourcePeak() > 0)) {
                 return Double.NaN;

@@ -28,6 +28,8 @@ public final class StudyPlane {
     private final PlaneAxis x;
     private final PlaneAxis y;
     private final String studyHash;
+    private final org.ferromap.equipment.SaturationCurve studyCurve;
+    private final org.ferromap.equipment.SaturationCurve balanceCurve;
 
     /**
      * @throws FerromapException {@code BAD_REQUEST} when both axes sweep the same parameter, and
@@ -56,6 +58,8 @@ public final class StudyPlane {
             }
         }
         this.studyHash = studyHash(parameters.study());
+        this.studyCurve = parameters.study().circuit().magnetizing();
+        this.balanceCurve = MemoizedCurve.wrap(studyCurve);
     }
 
     /** The plane of a study's {@code map:} section; {@code BAD_REQUEST} when it has none or only one axis. */
@@ -108,6 +112,16 @@ public final class StudyPlane {
     /** The equivalent circuit at the point {@code (xv, yv)}, given in the axes' display units. */
     public EquivalentCircuit circuit(double xv, double yv) {
         return parameters.circuit(x.parameter(), x.si(xv), y.parameter(), y.si(yv));
+    }
+
+    /**
+     * The circuit at a point for the balance: the same circuit, its magnetizing curve (when it is
+     * the study's, as for every parameter but none) remembering recent values across cells
+     * ({@link MemoizedCurve}: bit-identical results, less quadrature).
+     */
+    public EquivalentCircuit balanceCircuit(double xv, double yv) {
+        EquivalentCircuit c = circuit(xv, yv);
+        return balanceCurve != studyCurve && c.magnetizing() == studyCurve ? c.withMagnetizing(balanceCurve) : c;
     }
 
     /** The grid to compute, with the given tile side. */
