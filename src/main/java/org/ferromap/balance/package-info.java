@@ -13,10 +13,15 @@
  *       the plain interface the continuation engine consumes.</li>
  *   <li>{@link org.ferromap.balance.MultiHarmonicBalance}: Newton solutions, folds and Hill
  *       stability ({@link org.ferromap.balance.HillStability}) of multi-harmonic steady states.</li>
+ *   <li>{@link org.ferromap.balance.BalanceContinuation}: the balance handed to the continuation
+ *       engine in any parameter ({@link org.ferromap.balance.BalanceAxis}, the circuit given as a
+ *       function of one or two values): branches with stability, folds and branch points
+ *       ({@link org.ferromap.balance.BranchResult}), fold curves with cusps and labelled regions
+ *       ({@link org.ferromap.balance.FoldCurveResult}).</li>
  * </ul>
  *
  * Everything is computed in per unit (voltage base the rated peak, flux base V/w, current base
  * w C V) so that SI studies with polynomial coefficients near 1e-17 need no hand scaling.
- * May use: circuit, equipment, errors, Hipparchus (core, ode).
+ * May use: circuit, equipment, continuation, errors, Hipparchus (core, ode).
  */
 package org.ferromap.balance;

@@ -24,8 +24,12 @@ final class NetworkRecorder implements ODEStepHandler {
     private final double sampleStep;
     private final double[][] samples;
     private final double[][] sampleWinding;
+    private final double eventStart;
+    private final double[][] event;
+    private final double[][] eventWinding;
     private int nextStrobe;
     private int nextSample;
+    private int nextEvent;
 
     /**
      * @param dimension state dimension
@@ -34,6 +38,15 @@ final class NetworkRecorder implements ODEStepHandler {
      * @param recordedPeriods periods recorded at the end
      */
     NetworkRecorder(int dimension, int periods, int samplesPerPeriod, int recordedPeriods) {
+        this(dimension, periods, samplesPerPeriod, recordedPeriods, 0.0, 0);
+    }
+
+    /**
+     * @param eventStart per-unit time at which the event record starts, &gt;= 0
+     * @param eventSamples samples of the event record (0 for none), cut at the end of the run
+     */
+    NetworkRecorder(int dimension, int periods, int samplesPerPeriod, int recordedPeriods, double eventStart,
+            int eventSamples) {
         this.dimension = dimension;
         this.strobeStep = 2 * Math.PI;
         this.strobes = new double[dimension][periods + 1];
@@ -42,12 +55,18 @@ final class NetworkRecorder implements ODEStepHandler {
         this.sampleStep = 2 * Math.PI / samplesPerPeriod;
         this.samples = new double[dimension][samplesPerPeriod * recordedPeriods + 1];
         this.sampleWinding = new double[3][samples[0].length];
+        this.eventStart = eventStart;
+        int fit = eventSamples == 0 ? 0
+                : (int) Math.min(eventSamples, Math.floor((2 * Math.PI * periods - eventStart) / sampleStep + 1e-9) + 1);
+        this.event = new double[dimension][Math.max(0, fit)];
+        this.eventWinding = new double[3][Math.max(0, fit)];
     }
 
     @Override
     public void init(ODEStateAndDerivative initialState, double finalTime) {
         nextStrobe = 0;
         nextSample = 0;
+        nextEvent = 0;
     }
 
     @Override
@@ -61,6 +80,9 @@ final class NetworkRecorder implements ODEStepHandler {
         while (nextSample < samples[0].length && windowStart + nextSample * sampleStep <= tEnd + slack) {
             store(interpolator, Math.min(windowStart + nextSample * sampleStep, tEnd), samples, sampleWinding,
                     nextSample++);
+        }
+        while (nextEvent < event[0].length && eventStart + nextEvent * sampleStep <= tEnd + slack) {
+            store(interpolator, Math.min(eventStart + nextEvent * sampleStep, tEnd), event, eventWinding, nextEvent++);
         }
     }
 
@@ -79,6 +101,19 @@ final class NetworkRecorder implements ODEStepHandler {
     /** Per-unit time of waveform sample j. */
     double sampleTau(int j) {
         return windowStart + j * sampleStep;
+    }
+
+    /** Per-unit time of event sample j. */
+    double eventTau(int j) {
+        return eventStart + j * sampleStep;
+    }
+
+    double[][] event() {
+        return event;
+    }
+
+    double[][] eventWindingVoltages() {
+        return eventWinding;
     }
 
     double[][] strobes() {

@@ -23,6 +23,10 @@ import org.ferromap.errors.MessageKey;
  *        phases whose pole is open at the end, V; NaN when every pole stayed closed
  * @param finalState the SI state at the end of the run
  * @param evaluations right-hand-side evaluations the integrator spent (a cost figure)
+ * @param eventTime sample instants of the record around the switching event, s (empty when none
+ *        was asked for): from one period before the earliest opening command, or the start
+ * @param eventWaveforms [component][sample], SI, over the event record
+ * @param eventWindingVoltages [winding][sample], V, over the event record
  */
 public record NetworkResult(
         StateLayout layout,
@@ -36,7 +40,24 @@ public record NetworkResult(
         double[][] strobeWindingVoltages,
         double peakOpenPhaseVoltage,
         double[] finalState,
-        int evaluations) {
+        int evaluations,
+        double[] eventTime,
+        double[][] eventWaveforms,
+        double[][] eventWindingVoltages) {
+
+    /** A result without an event record. */
+    public NetworkResult(StateLayout layout, double period, double[] openingTimes, double[] time,
+            double[][] waveforms, double[][] windingVoltages, double[] strobeTimes, double[][] strobes,
+            double[][] strobeWindingVoltages, double peakOpenPhaseVoltage, double[] finalState, int evaluations) {
+        this(layout, period, openingTimes, time, waveforms, windingVoltages, strobeTimes, strobes,
+                strobeWindingVoltages, peakOpenPhaseVoltage, finalState, evaluations, new double[0],
+                new double[layout.dimension()][0], new double[3][0]);
+    }
+
+    /** The event record of the named component ("v_a", "lambda_ab", ...), SI. */
+    public double[] eventWaveform(String name) {
+        return eventWaveforms[index(name)];
+    }
 
     /** The recorded waveform of the named component ("v_a", "lambda_ab", ...), SI. */
     public double[] waveform(String name) {

@@ -89,8 +89,19 @@ public final class NetworkSimulation {
                 openers.add(d.opener());
             }
         }
+        // The event record starts one period before the earliest opening command (or at the start).
+        double firstCommand = Double.POSITIVE_INFINITY;
+        for (int k = 0; k < 3; k++) {
+            if (eq.isClosed(k) && plan.pole(k).opens()) {
+                firstCommand = Math.min(firstCommand, omega * plan.pole(k).commandTime());
+            }
+        }
+        double eventStart = Double.isInfinite(firstCommand) ? 0.0 : Math.max(0.0, firstCommand - 2 * Math.PI);
+        double eventEnd = (Double.isInfinite(firstCommand) ? 0.0 : firstCommand) + 2 * Math.PI * settings.eventPeriods();
+        int eventSamples = settings.eventPeriods() == 0 ? 0
+                : (int) Math.floor((eventEnd - eventStart) * settings.samplesPerPeriod() / (2 * Math.PI) + 1e-9) + 1;
         NetworkRecorder recorder = new NetworkRecorder(dim, settings.periods(), settings.samplesPerPeriod(),
-                settings.recordedPeriods());
+                settings.recordedPeriods(), eventStart, eventSamples);
         integrator.addStepHandler(recorder);
 
         double tauEnd = 2 * Math.PI * settings.periods();
@@ -133,10 +144,15 @@ public final class NetworkSimulation {
             }
         }
         double vBase = network.perUnit().voltage();
+        double[] eventTime = new double[recorder.event()[0].length];
+        for (int j = 0; j < eventTime.length; j++) {
+            eventTime[j] = recorder.eventTau(j) / omega;
+        }
         return new NetworkResult(layout, network.period(), openedAt, time, waveforms,
                 scale(recorder.sampleWindingVoltages(), vBase), strobeTimes, strobes,
                 scale(recorder.strobeWindingVoltages(), vBase), peak,
-                layout.toSi(end.getPrimaryState()), integrator.getEvaluations());
+                layout.toSi(end.getPrimaryState()), integrator.getEvaluations(), eventTime,
+                toSi(layout, recorder.event()), scale(recorder.eventWindingVoltages(), vBase));
     }
 
     private static double[][] toSi(StateLayout layout, double[][] rows) {

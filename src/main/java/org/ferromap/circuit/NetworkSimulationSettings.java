@@ -20,6 +20,9 @@ import org.ferromap.errors.MessageKey;
  *        slope's per-unit value)
  * @param maxCheckInterval longest interval between checks of a pole current's sign, per-unit time
  *        (default 2 pi / 128: current zeros closer than 1/128 period may be missed)
+ * @param eventPeriods periods recorded around the switching event, &gt;= 0 (default 4): from one
+ *        period before the earliest opening command (or the start) to {@code eventPeriods} periods
+ *        after it, at {@code samplesPerPeriod}; 0 records nothing
  */
 public record NetworkSimulationSettings(
         int periods,
@@ -28,7 +31,8 @@ public record NetworkSimulationSettings(
         int samplesPerPeriod,
         int recordedPeriods,
         double eventThreshold,
-        double maxCheckInterval) {
+        double maxCheckInterval,
+        int eventPeriods) {
 
     public NetworkSimulationSettings {
         if (periods < 1) {
@@ -58,46 +62,65 @@ public record NetworkSimulationSettings(
             throw new FerromapException(MessageKey.OUT_OF_RANGE,
                     "max check interval = " + maxCheckInterval + " pu time; expected a value in (0, pi]");
         }
+        if (eventPeriods < 0 || eventPeriods > 1000) {
+            throw new FerromapException(MessageKey.OUT_OF_RANGE,
+                    "event periods = " + eventPeriods + "; expected between 0 and 1000");
+        }
+    }
+
+    /** Default of {@code eventPeriods}. */
+    public static final int DEFAULT_EVENT_PERIODS = 4;
+
+    /** Settings without an event record's length: {@code eventPeriods} takes its default. */
+    public NetworkSimulationSettings(int periods, double relativeTolerance, double absoluteTolerance,
+            int samplesPerPeriod, int recordedPeriods, double eventThreshold, double maxCheckInterval) {
+        this(periods, relativeTolerance, absoluteTolerance, samplesPerPeriod, recordedPeriods, eventThreshold,
+                maxCheckInterval, DEFAULT_EVENT_PERIODS);
     }
 
     /** The documented defaults. */
     public static NetworkSimulationSettings defaults() {
-        return new NetworkSimulationSettings(100, 1e-8, 1e-8, 256, 5, 1e-10, 2 * Math.PI / 128);
+        return new NetworkSimulationSettings(100, 1e-8, 1e-8, 256, 5, 1e-10, 2 * Math.PI / 128, DEFAULT_EVENT_PERIODS);
     }
 
     /** Sets the periods, pulling the recorded window down to fit when needed. */
     public NetworkSimulationSettings withPeriods(int n) {
         return new NetworkSimulationSettings(n, relativeTolerance, absoluteTolerance, samplesPerPeriod,
-                Math.min(recordedPeriods, Math.max(n, 1)), eventThreshold, maxCheckInterval);
+                Math.min(recordedPeriods, Math.max(n, 1)), eventThreshold, maxCheckInterval, eventPeriods);
     }
 
     public NetworkSimulationSettings withRelativeTolerance(double v) {
         return new NetworkSimulationSettings(periods, v, absoluteTolerance, samplesPerPeriod, recordedPeriods,
-                eventThreshold, maxCheckInterval);
+                eventThreshold, maxCheckInterval, eventPeriods);
     }
 
     public NetworkSimulationSettings withAbsoluteTolerance(double v) {
         return new NetworkSimulationSettings(periods, relativeTolerance, v, samplesPerPeriod, recordedPeriods,
-                eventThreshold, maxCheckInterval);
+                eventThreshold, maxCheckInterval, eventPeriods);
     }
 
     public NetworkSimulationSettings withSamplesPerPeriod(int n) {
         return new NetworkSimulationSettings(periods, relativeTolerance, absoluteTolerance, n, recordedPeriods,
-                eventThreshold, maxCheckInterval);
+                eventThreshold, maxCheckInterval, eventPeriods);
     }
 
     public NetworkSimulationSettings withRecordedPeriods(int n) {
         return new NetworkSimulationSettings(periods, relativeTolerance, absoluteTolerance, samplesPerPeriod, n,
-                eventThreshold, maxCheckInterval);
+                eventThreshold, maxCheckInterval, eventPeriods);
     }
 
     public NetworkSimulationSettings withEventThreshold(double v) {
         return new NetworkSimulationSettings(periods, relativeTolerance, absoluteTolerance, samplesPerPeriod,
-                recordedPeriods, v, maxCheckInterval);
+                recordedPeriods, v, maxCheckInterval, eventPeriods);
+    }
+
+    public NetworkSimulationSettings withEventPeriods(int n) {
+        return new NetworkSimulationSettings(periods, relativeTolerance, absoluteTolerance, samplesPerPeriod,
+                recordedPeriods, eventThreshold, maxCheckInterval, n);
     }
 
     public NetworkSimulationSettings withMaxCheckInterval(double v) {
         return new NetworkSimulationSettings(periods, relativeTolerance, absoluteTolerance, samplesPerPeriod,
-                recordedPeriods, eventThreshold, v);
+                recordedPeriods, eventThreshold, v, eventPeriods);
     }
 }

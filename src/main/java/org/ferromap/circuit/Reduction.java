@@ -154,6 +154,22 @@ public final class Reduction {
         return Exactness.LINEAR_ONLY;
     }
 
+    /**
+     * The loop voltage W of the table in the class notes, read from the three-phase network: W =
+     * v_a + sum_k w_k e_k, with v_a the open phase a's node voltage and e_k the supply phases;
+     * returns {w_a, w_b, w_c}. Grounded wye: W = v_a (each open phase's own node). Ungrounded wye
+     * or delta, one open: W = v_a - (e_b + e_c)/2; two open (a and b): W = v_a - e_c. The loop's
+     * source is E_eq times the supply at its phase a angle plus {@link OpenPhaseLoop#sourceAngleShift()},
+     * so on the normal (inductive) branch W's fundamental is in phase with it and on the
+     * ferroresonant (capacitive) branch in antiphase.
+     */
+    public static double[] loopSourceWeights(Connection conn, OpenPhaseCase open) {
+        if (conn == Connection.GROUNDED_WYE) {
+            return new double[] {0, 0, 0};
+        }
+        return open.openPhases() == 1 ? new double[] {0, -0.5, -0.5} : new double[] {0, 0, -1};
+    }
+
     /** Loop voltage at rated excitation over the rated phase-to-neutral voltage (see {@link ReducedCircuit}). */
     public static double loopVoltageRatio(Connection conn) {
         return switch (conn) {

@@ -3,6 +3,8 @@ package org.ferromap.circuit;
 import java.util.ArrayList;
 import java.util.List;
 import org.ferromap.equipment.Connection;
+import org.ferromap.equipment.Installation;
+import org.ferromap.equipment.Transformer;
 import org.ferromap.errors.FerromapException;
 import org.ferromap.errors.MessageKey;
 
@@ -111,6 +113,23 @@ public record ThreePhaseNetwork(
             Connection connection, WindingBranch winding) {
         return new ThreePhaseNetwork(omega, sourcePeak, 0.0, ccs, ccc, connection,
                 List.of(winding, winding, winding), 0.0);
+    }
+
+    /**
+     * The network of an installation: the supply's phase-to-neutral peak and phase-a angle, the
+     * whole run's Ccs and Ccc, the bank's connection, and on each of the three windings the
+     * transformer's winding curve (as connected) with the winding's core-loss resistance
+     * R_w = 3 V_w^2 / P (each winding dissipates a third of the no-load loss P at its rated rms
+     * voltage V_w; infinite when P = 0), unloaded, with the quasi-static neutral. A multi-legged
+     * core is represented as three separate cores: its magnetic coupling is not modelled here either.
+     */
+    public static ThreePhaseNetwork of(Installation in) {
+        Transformer t = in.transformer();
+        double vw = t.windingVoltage();
+        double rw = t.noLoadLoss() > 0 ? 3.0 * vw * vw / t.noLoadLoss() : Double.POSITIVE_INFINITY;
+        WindingBranch w = WindingBranch.withLoss(t.phaseCurve(), rw);
+        return new ThreePhaseNetwork(in.omega(), in.sourcePhasePeak(), in.sourceAngle(), in.coreToSheath(),
+                in.coreToCore(), t.connection(), List.of(w, w, w), 0.0);
     }
 
     /** r = Ccc / Ccs, the cable's core-to-core ratio (DOMAIN.md §1.2). */

@@ -7,7 +7,7 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 
 /** Validates a study and lists every problem with its path in the file. */
-@Command(name = "check", description = {
+@Command(name = "check", header = "Validate a study file and list every problem with its path.", description = {
     "Validate a study file: every problem is listed with its path in the file.",
     "Exit 0 when the study can be used, 2 when it has problems."})
 final class CheckCommand extends BaseCommand {

@@ -13,7 +13,7 @@ import picocli.CommandLine.Command;
 import picocli.CommandLine.Mixin;
 
 /** The saturation curve the study holds: its defining points, a chart and CSV. */
-@Command(name = "curve", description = {
+@Command(name = "curve", header = "Show the magnetizing curve held for the study, with chart and CSV.", description = {
     "Show the magnetizing curve held for the study's equivalent circuit: its defining points",
     "(one per rms test point for test data), a chart (PNG, SVG, PDF) and CSV under <out>/<study>/curve."})
 final class CurveCommand extends BaseCommand {

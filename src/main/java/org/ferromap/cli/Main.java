@@ -12,7 +12,18 @@ import picocli.CommandLine.Command;
         mixinStandardHelpOptions = true,
         versionProvider = Main.Version.class,
         description = "Maps where a cable-fed transformer with open phases is safe from ferroresonance.",
-        subcommands = {CommandLine.HelpCommand.class, CheckCommand.class, CurveCommand.class, MapCommand.class, RunCommand.class})
+        subcommands = {
+            CommandLine.HelpCommand.class,
+            CheckCommand.class,
+            CurveCommand.class,
+            PointsCommand.class,
+            BranchCommand.class,
+            FoldsCommand.class,
+            SimulateCommand.class,
+            BenchCommand.class,
+            MapCommand.class,
+            RunCommand.class,
+        })
 public final class Main implements Runnable {
 
     /** Exit code for success. */

@@ -25,6 +25,11 @@ package org.ferromap.dynamics;
  * @param periodsSimulated source periods integrated along the trajectory
  * @param rhsEvaluations right-hand-side evaluations spent, certification included
  * @param reason why the mode is undetermined, or a note on how it was decided
+ * @param event the first {@link SimulationSettings#eventPeriods()} periods from the switching
+ *        instant (t = 0), at the settings' samples a period; shorter when the run failed sooner
+ * @param section the stroboscopic section of the settled state, times from the switching
+ *        instant: the p points of the orbit for a periodic state (exact fixed points of P^j), the
+ *        samples after the transient (at most the last {@link #SECTION_LIMIT}) otherwise
  */
 public record SimulationResult(
         SteadyMode mode,
@@ -43,9 +48,26 @@ public record SimulationResult(
         double[] strobeVoltage,
         int periodsSimulated,
         long rhsEvaluations,
-        String reason) {
+        String reason,
+        Waveform event,
+        Waveform section) {
+
+    /** Most samples kept in {@code section} for a state that is not periodic. */
+    public static final int SECTION_LIMIT = 1024;
+
+    /** A result without event record or section (both empty). */
+    public SimulationResult(SteadyMode mode, int period, double peakVoltage, double peakPerUnit,
+            double lyapunovPerPeriod, double zeroOneK, boolean certified, double[] multiplierReal,
+            double[] multiplierImag, double fundamentalPhase, Spectrum spectrum, Waveform window, double[] strobeFlux,
+            double[] strobeVoltage, int periodsSimulated, long rhsEvaluations, String reason) {
+        this(mode, period, peakVoltage, peakPerUnit, lyapunovPerPeriod, zeroOneK, certified, multiplierReal,
+                multiplierImag, fundamentalPhase, spectrum, window, strobeFlux, strobeVoltage, periodsSimulated,
+                rhsEvaluations, reason, Waveform.empty(), Waveform.empty());
+    }
 
     public SimulationResult {
+        event = event == null ? Waveform.empty() : event;
+        section = section == null ? Waveform.empty() : section;
         multiplierReal = multiplierReal.clone();
         multiplierImag = multiplierImag.clone();
         strobeFlux = strobeFlux.clone();

@@ -28,6 +28,8 @@ import org.ferromap.errors.MessageKey;
  *        reported stiff; default 20000
  * @param spectrumPeriods source periods of the window analysed when the state is not periodic,
  *        a power of two; default 64
+ * @param eventPeriods source periods recorded from the switching instant as the event waveform,
+ *        at {@code samplesPerPeriod} samples a period, in [0, 1000]; default 4 (0 records nothing)
  */
 public record SimulationSettings(
         int maxPeriods,
@@ -44,7 +46,8 @@ public record SimulationSettings(
         double lyapunovZeroBand,
         double zeroOneThreshold,
         int maxStepsPerPeriod,
-        int spectrumPeriods) {
+        int spectrumPeriods,
+        int eventPeriods) {
 
     public SimulationSettings {
         require(maxPeriods >= 1, "max periods", maxPeriods, ">= 1");
@@ -66,97 +69,117 @@ public record SimulationSettings(
         require(maxStepsPerPeriod >= 10, "max steps per period", maxStepsPerPeriod, ">= 10");
         require(spectrumPeriods >= 1 && Integer.bitCount(spectrumPeriods) == 1 && spectrumPeriods <= 4096,
                 "spectrum periods", spectrumPeriods, "a power of two in [1, 4096]");
+        require(eventPeriods >= 0 && eventPeriods <= 1000, "event periods", eventPeriods, "in [0, 1000]");
     }
+
+    /** The settings without an event record's length: {@code eventPeriods} takes its default, 4. */
+    public SimulationSettings(int maxPeriods, int transientPeriods, double tolerance, int samplesPerPeriod,
+            double initialFlux, double initialVoltage, double sourceAngle, boolean certify, int certifyEvery,
+            int maxOrder, double peakThreshold, double lyapunovZeroBand, double zeroOneThreshold,
+            int maxStepsPerPeriod, int spectrumPeriods) {
+        this(maxPeriods, transientPeriods, tolerance, samplesPerPeriod, initialFlux, initialVoltage, sourceAngle,
+                certify, certifyEvery, maxOrder, peakThreshold, lyapunovZeroBand, zeroOneThreshold, maxStepsPerPeriod,
+                spectrumPeriods, DEFAULT_EVENT_PERIODS);
+    }
+
+    /** Default of {@code eventPeriods}. */
+    public static final int DEFAULT_EVENT_PERIODS = 4;
 
     /** The documented defaults. */
     public static SimulationSettings defaults() {
         return new SimulationSettings(2000, 20, 1e-9, 100, 0, 0, Double.NaN, true, 10, 8, 1.25, 0.01, 0.5,
-                20000, 64);
+                20000, 64, DEFAULT_EVENT_PERIODS);
     }
 
     public SimulationSettings withMaxPeriods(int v) {
         return new SimulationSettings(v, transientPeriods, tolerance, samplesPerPeriod, initialFlux, initialVoltage,
                 sourceAngle, certify, certifyEvery, maxOrder, peakThreshold, lyapunovZeroBand, zeroOneThreshold,
-                maxStepsPerPeriod, spectrumPeriods);
+                maxStepsPerPeriod, spectrumPeriods, eventPeriods);
     }
 
     public SimulationSettings withTransientPeriods(int v) {
         return new SimulationSettings(maxPeriods, v, tolerance, samplesPerPeriod, initialFlux, initialVoltage,
                 sourceAngle, certify, certifyEvery, maxOrder, peakThreshold, lyapunovZeroBand, zeroOneThreshold,
-                maxStepsPerPeriod, spectrumPeriods);
+                maxStepsPerPeriod, spectrumPeriods, eventPeriods);
     }
 
     public SimulationSettings withTolerance(double v) {
         return new SimulationSettings(maxPeriods, transientPeriods, v, samplesPerPeriod, initialFlux, initialVoltage,
                 sourceAngle, certify, certifyEvery, maxOrder, peakThreshold, lyapunovZeroBand, zeroOneThreshold,
-                maxStepsPerPeriod, spectrumPeriods);
+                maxStepsPerPeriod, spectrumPeriods, eventPeriods);
     }
 
     public SimulationSettings withSamplesPerPeriod(int v) {
         return new SimulationSettings(maxPeriods, transientPeriods, tolerance, v, initialFlux, initialVoltage,
                 sourceAngle, certify, certifyEvery, maxOrder, peakThreshold, lyapunovZeroBand, zeroOneThreshold,
-                maxStepsPerPeriod, spectrumPeriods);
+                maxStepsPerPeriod, spectrumPeriods, eventPeriods);
     }
 
     /** Initial flux linkage (Wb-turn) and terminal voltage (V) at switching. */
     public SimulationSettings withInitialState(double flux, double voltage) {
         return new SimulationSettings(maxPeriods, transientPeriods, tolerance, samplesPerPeriod, flux, voltage,
                 sourceAngle, certify, certifyEvery, maxOrder, peakThreshold, lyapunovZeroBand, zeroOneThreshold,
-                maxStepsPerPeriod, spectrumPeriods);
+                maxStepsPerPeriod, spectrumPeriods, eventPeriods);
     }
 
     public SimulationSettings withSourceAngle(double rad) {
         return new SimulationSettings(maxPeriods, transientPeriods, tolerance, samplesPerPeriod, initialFlux,
                 initialVoltage, rad, certify, certifyEvery, maxOrder, peakThreshold, lyapunovZeroBand,
-                zeroOneThreshold, maxStepsPerPeriod, spectrumPeriods);
+                zeroOneThreshold, maxStepsPerPeriod, spectrumPeriods, eventPeriods);
     }
 
     public SimulationSettings withCertify(boolean v) {
         return new SimulationSettings(maxPeriods, transientPeriods, tolerance, samplesPerPeriod, initialFlux,
                 initialVoltage, sourceAngle, v, certifyEvery, maxOrder, peakThreshold, lyapunovZeroBand,
-                zeroOneThreshold, maxStepsPerPeriod, spectrumPeriods);
+                zeroOneThreshold, maxStepsPerPeriod, spectrumPeriods, eventPeriods);
     }
 
     public SimulationSettings withCertifyEvery(int v) {
         return new SimulationSettings(maxPeriods, transientPeriods, tolerance, samplesPerPeriod, initialFlux,
                 initialVoltage, sourceAngle, certify, v, maxOrder, peakThreshold, lyapunovZeroBand,
-                zeroOneThreshold, maxStepsPerPeriod, spectrumPeriods);
+                zeroOneThreshold, maxStepsPerPeriod, spectrumPeriods, eventPeriods);
     }
 
     public SimulationSettings withMaxOrder(int v) {
         return new SimulationSettings(maxPeriods, transientPeriods, tolerance, samplesPerPeriod, initialFlux,
                 initialVoltage, sourceAngle, certify, certifyEvery, v, peakThreshold, lyapunovZeroBand,
-                zeroOneThreshold, maxStepsPerPeriod, spectrumPeriods);
+                zeroOneThreshold, maxStepsPerPeriod, spectrumPeriods, eventPeriods);
     }
 
     public SimulationSettings withPeakThreshold(double pu) {
         return new SimulationSettings(maxPeriods, transientPeriods, tolerance, samplesPerPeriod, initialFlux,
                 initialVoltage, sourceAngle, certify, certifyEvery, maxOrder, pu, lyapunovZeroBand,
-                zeroOneThreshold, maxStepsPerPeriod, spectrumPeriods);
+                zeroOneThreshold, maxStepsPerPeriod, spectrumPeriods, eventPeriods);
     }
 
     public SimulationSettings withLyapunovZeroBand(double v) {
         return new SimulationSettings(maxPeriods, transientPeriods, tolerance, samplesPerPeriod, initialFlux,
                 initialVoltage, sourceAngle, certify, certifyEvery, maxOrder, peakThreshold, v,
-                zeroOneThreshold, maxStepsPerPeriod, spectrumPeriods);
+                zeroOneThreshold, maxStepsPerPeriod, spectrumPeriods, eventPeriods);
     }
 
     public SimulationSettings withZeroOneThreshold(double v) {
         return new SimulationSettings(maxPeriods, transientPeriods, tolerance, samplesPerPeriod, initialFlux,
                 initialVoltage, sourceAngle, certify, certifyEvery, maxOrder, peakThreshold, lyapunovZeroBand,
-                v, maxStepsPerPeriod, spectrumPeriods);
+                v, maxStepsPerPeriod, spectrumPeriods, eventPeriods);
     }
 
     public SimulationSettings withMaxStepsPerPeriod(int v) {
         return new SimulationSettings(maxPeriods, transientPeriods, tolerance, samplesPerPeriod, initialFlux,
                 initialVoltage, sourceAngle, certify, certifyEvery, maxOrder, peakThreshold, lyapunovZeroBand,
-                zeroOneThreshold, v, spectrumPeriods);
+                zeroOneThreshold, v, spectrumPeriods, eventPeriods);
     }
 
     public SimulationSettings withSpectrumPeriods(int v) {
         return new SimulationSettings(maxPeriods, transientPeriods, tolerance, samplesPerPeriod, initialFlux,
                 initialVoltage, sourceAngle, certify, certifyEvery, maxOrder, peakThreshold, lyapunovZeroBand,
-                zeroOneThreshold, maxStepsPerPeriod, v);
+                zeroOneThreshold, maxStepsPerPeriod, v, eventPeriods);
+    }
+
+    public SimulationSettings withEventPeriods(int v) {
+        return new SimulationSettings(maxPeriods, transientPeriods, tolerance, samplesPerPeriod, initialFlux,
+                initialVoltage, sourceAngle, certify, certifyEvery, maxOrder, peakThreshold, lyapunovZeroBand,
+                zeroOneThreshold, maxStepsPerPeriod, spectrumPeriods, v);
     }
 
     private static void require(boolean ok, String what, double value, String allowed) {

@@ -15,7 +15,8 @@ import org.ferromap.errors.FerromapException;
  * trajectory has reached a stable periodic orbit; if so it stops at once. This is what makes
  * lightly damped cases, which close in on their orbit over hundreds of periods, affordable.
  *
- * <p>Classification rules:
+ * <p>Classification rules (the shared ones live in {@link ModeRules}, which the three-phase
+ * {@link NetworkClassifier} applies too):
  * <ul>
  * <li>A certified orbit (or, without certification, stroboscopic samples that repeat after p
  * periods to 1e-6 per unit over the last 10 periods) of period p &gt; 1 is subharmonic.</li>
@@ -35,9 +36,9 @@ import org.ferromap.errors.FerromapException;
 public final class Simulator {
 
     /** Relative closeness of repeating stroboscopic samples for an uncertified periodic verdict. */
-    private static final double RECURRENCE_TOLERANCE = 1e-6;
-    private static final int RECURRENCE_SPAN = 10;
-    private static final int ZERO_ONE_FREQUENCIES = 32;
+    static final double RECURRENCE_TOLERANCE = 1e-6;
+    static final int RECURRENCE_SPAN = 10;
+    static final int ZERO_ONE_FREQUENCIES = 32;
 
     private Simulator() {
     }
@@ -85,6 +86,9 @@ public final class Simulator {
         private final double[] windowX;
         private final double[] windowY;
         private int windowFilled;
+        private final double[] eventX;
+        private final double[] eventY;
+        private int eventFilled;
 
         Run(PerUnitCircuit model, SimulationSettings s) {
             this.model = model;
@@ -101,6 +105,37 @@ public final class Simulator {
             windowSamplesPerPeriod = nextPowerOfTwo(s.samplesPerPeriod());
             windowX = new double[windowPeriods * windowSamplesPerPeriod];
             windowY = new double[windowX.length];
+            int eventSamples = s.eventPeriods() == 0 ? 0
+                    : Math.min(s.eventPeriods(), s.maxPeriods()) * s.samplesPerPeriod() + 1;
+            eventX = new double[eventSamples];
+            eventY = new double[eventSamples];
+        }
+
+        /**
+         * A listener that samples the event record from {@code source}'s dense output (the first
+         * periods, uniform at samplesPerPeriod) and then calls {@code next}; null when neither is wanted.
+         */
+        private DormandPrince853.StepListener withEvent(DormandPrince853 source, DormandPrince853.StepListener next) {
+            if (eventFilled >= eventX.length) {
+                return next;
+            }
+            double dt = PerUnitCircuit.PERIOD / s.samplesPerPeriod();
+            // a sample that rounding puts a hair past the end of a period still belongs to it
+            double slack = 1e-9 * dt;
+            return (a, b) -> {
+                while (eventFilled < eventX.length) {
+                    double tj = eventFilled * dt;
+                    if (tj > b + slack) {
+                        break;
+                    }
+                    eventX[eventFilled] = source.interpolate(Math.min(tj, b), 0);
+                    eventY[eventFilled] = source.interpolate(Math.min(tj, b), 1);
+                    eventFilled++;
+                }
+                if (next != null) {
+                    next.stepAccepted(a, b);
+                }
+            };
         }
 
         SimulationResult execute() {
@@ -110,6 +145,11 @@ public final class Simulator {
             DormandPrince853.Rhs rhs2 = model::derivatives;
             DormandPrince853.Rhs rhs4 = model::derivativesWithTangent;
             double[] z2 = {z[0], z[1]};
+            if (eventX.length > 0) {
+                eventX[0] = z[0];
+                eventY[0] = z[1];
+                eventFilled = 1;
+            }
             int windowStart = s.maxPeriods() - windowPeriods + 1;
             double dtWindow = PerUnitCircuit.PERIOD / windowSamplesPerPeriod;
             for (int k = 1; k <= s.maxPeriods(); k++) {
@@ -117,7 +157,7 @@ public final class Simulator {
                 double t1 = k * PerUnitCircuit.PERIOD;
                 DormandPrince853.Status status;
                 if (k <= s.transientPeriods()) {
-                    status = plain.integrate(rhs2, t0, z2, t1, s.maxStepsPerPeriod(), null);
+                    status = plain.integrate(rhs2, t0, z2, t1, s.maxStepsPerPeriod(), withEvent(plain, null));
                     z[0] = z2[0];
                     z[1] = z2[1];
                 } else {
@@ -137,7 +177,7 @@ public final class Simulator {
                             }
                         };
                     }
-                    status = tangent.integrate(rhs4, t0, z, t1, s.maxStepsPerPeriod(), recorder);
+                    status = tangent.integrate(rhs4, t0, z, t1, s.maxStepsPerPeriod(), withEvent(tangent, recorder));
                     double norm = Math.hypot(z[2], z[3]);
                     if (status == DormandPrince853.Status.OK && norm > 0 && Double.isFinite(norm)) {
                         lyapunovSum += Math.log(norm);
@@ -177,12 +217,23 @@ public final class Simulator {
             wx[0] = zz[0];
             wy[0] = zz[1];
             filled[0] = 1;
+            // The section: the orbit's points at whole periods, read from the same dense output.
+            double[] ox = new double[p];
+            double[] oy = new double[p];
+            ox[0] = zz[0];
+            oy[0] = zz[1];
+            int[] points = {1};
             DormandPrince853.Status st = dense.integrate(model::derivatives, 0.0, zz, span,
                     (long) p * s.maxStepsPerPeriod(), (a, b) -> {
                         while (filled[0] < n && filled[0] * dt <= b) {
                             wx[filled[0]] = dense.interpolate(filled[0] * dt, 0);
                             wy[filled[0]] = dense.interpolate(filled[0] * dt, 1);
                             filled[0]++;
+                        }
+                        while (points[0] < p && points[0] * PerUnitCircuit.PERIOD <= b) {
+                            ox[points[0]] = dense.interpolate(points[0] * PerUnitCircuit.PERIOD, 0);
+                            oy[points[0]] = dense.interpolate(points[0] * PerUnitCircuit.PERIOD, 1);
+                            points[0]++;
                         }
                     });
             if (st != DormandPrince853.Status.OK) {
@@ -200,12 +251,9 @@ public final class Simulator {
                 // Line 1 is the fundamental; its phase is that of a cosine at tau = 0. The source
                 // e = E sin(tau + phi) is a cosine of phase phi - pi/2.
                 phase = wrap(spectrum.phase()[1] - (model.phase() - Math.PI / 2));
-                boolean antiphase = Math.abs(phase) > Math.PI / 2;
-                boolean high = peak > s.peakThreshold();
-                mode = antiphase || high ? SteadyMode.FUNDAMENTAL : SteadyMode.NORMAL;
-                note = antiphase ? "fundamental-frequency state in antiphase with the source (capacitive branch)"
-                        : high ? "fundamental-frequency state in phase with the source but above the peak threshold"
-                        : "fundamental-frequency state in phase with the source, below the peak threshold";
+                ModeRules.Verdict v = ModeRules.periodOne(phase, peak, s.peakThreshold());
+                mode = v.mode();
+                note = v.reason();
             } else {
                 mode = SteadyMode.SUBHARMONIC;
                 note = "periodic at " + p + " source periods";
@@ -214,9 +262,14 @@ public final class Simulator {
                 note += "; recurrence of the stroboscopic samples, not certified by Newton";
             }
             double lyap = Math.log(orbit.largestModulus()) / p;
+            double[] ot = new double[p];
+            for (int j = 0; j < p; j++) {
+                ot[j] = startTime + j * PerUnitCircuit.PERIOD / omega;
+            }
+            Waveform section = new Waveform(ot, scaled(ox, model.fluxBase()), scaled(oy, model.voltageBase()));
             return new SimulationResult(mode, p, peak * model.voltageBase(), peak, lyap, Double.NaN, certified,
                     orbit.multiplierReal(), orbit.multiplierImag(), phase, spectrum, window, strobeFlux(),
-                    strobeVoltage(), newest, evaluations(), note);
+                    strobeVoltage(), newest, evaluations(), note, event(), section);
         }
 
         /** Classification when the run used all its periods without certifying an orbit. */
@@ -224,20 +277,12 @@ public final class Simulator {
             int from = s.transientPeriods() + 1;
             // Samples that repeat after p periods, checked over the last periods, mean a periodic
             // state that the certifier could not confirm (certification off, or Newton failed).
-            if (newest - from >= RECURRENCE_SPAN + s.maxOrder()) {
-                for (int p = 1; p <= s.maxOrder(); p++) {
-                    double worst = 0;
-                    for (int j = newest - RECURRENCE_SPAN + 1; j <= newest; j++) {
-                        double scale = 1 + Math.hypot(xs[j], ys[j]);
-                        worst = Math.max(worst, Math.hypot(xs[j] - xs[j - p], ys[j] - ys[j - p]) / scale);
-                    }
-                    if (worst <= RECURRENCE_TOLERANCE) {
-                        Optional<PeriodicOrbit> orbit = certifier.newton(xs[newest], ys[newest], p);
-                        if (orbit.isPresent()) {
-                            return periodic(orbit.get(), false);
-                        }
-                        break;
-                    }
+            ModeRules.Recurrence rec = ModeRules.recurrence(new double[][] {xs, ys}, from, newest, s.maxOrder(),
+                    RECURRENCE_TOLERANCE, RECURRENCE_SPAN);
+            if (rec.periodic()) {
+                Optional<PeriodicOrbit> orbit = certifier.newton(xs[newest], ys[newest], rec.period());
+                if (orbit.isPresent()) {
+                    return periodic(orbit.get(), false);
                 }
             }
             double lyap = lyapunovPeriods > 0 ? lyapunovSum / lyapunovPeriods : Double.NaN;
@@ -251,42 +296,42 @@ public final class Simulator {
             Spectrum spectrum = windowFilled == windowX.length
                     ? Spectrum.ofRecord(windowY, windowPeriods * PerUnitCircuit.PERIOD / model.omega(), model.voltageBase())
                     : Spectrum.empty();
-            SteadyMode mode;
-            String reason;
-            double band = s.lyapunovZeroBand();
-            double threshold = s.zeroOneThreshold();
-            String figures = String.format("largest Lyapunov exponent %.4g per period, 0-1 test K = %.3f", lyap, k);
-            if (Double.isNaN(k) || Double.isNaN(lyap)) {
-                mode = SteadyMode.UNDETERMINED;
-                reason = "too few periods after the transient (" + (newest - s.transientPeriods())
-                        + ") for the 0-1 test and the Lyapunov exponent; raise max periods";
-            } else if (lyap > band && k > threshold) {
-                mode = SteadyMode.CHAOTIC;
-                reason = "chaotic: " + figures;
-            } else if (Math.abs(lyap) <= band && k <= threshold) {
-                mode = SteadyMode.QUASI_PERIODIC;
-                reason = "bounded and not periodic up to order " + s.maxOrder() + ": " + figures;
-            } else if (lyap < -band) {
-                mode = SteadyMode.UNDETERMINED;
-                reason = "contracting (" + figures + ") but no periodic orbit up to order " + s.maxOrder()
-                        + " found within " + s.maxPeriods() + " periods: not yet settled, or of higher order";
-            } else {
-                mode = SteadyMode.UNDETERMINED;
-                reason = "indicators disagree: " + figures;
-            }
-            return new SimulationResult(mode, 0, peak * model.voltageBase(), peak, lyap, k, false, new double[0],
+            ModeRules.Verdict v = ModeRules.notPeriodic(
+                    new ModeRules.Indicators(lyap, k, Double.NaN, false, newest - s.transientPeriods()),
+                    s.lyapunovZeroBand(), s.zeroOneThreshold(), s.maxOrder(), s.maxPeriods());
+            return new SimulationResult(v.mode(), 0, peak * model.voltageBase(), peak, lyap, k, false, new double[0],
                     new double[0], Double.NaN, spectrum, window, strobeFlux(), strobeVoltage(), newest,
-                    evaluations(), reason);
+                    evaluations(), v.reason(), event(), section());
         }
 
         SimulationResult undetermined(String reason) {
             return new SimulationResult(SteadyMode.UNDETERMINED, 0, Double.NaN, Double.NaN, Double.NaN, Double.NaN,
                     false, new double[0], new double[0], Double.NaN, Spectrum.empty(), Waveform.empty(),
-                    strobeFlux(), strobeVoltage(), newest, evaluations(), reason);
+                    strobeFlux(), strobeVoltage(), newest, evaluations(), reason, event(), section());
         }
 
         private long evaluations() {
             return plain.evaluations() + tangent.evaluations() + map.evaluations();
+        }
+
+        /** The event record as far as it was filled. */
+        private Waveform event() {
+            int n = eventFilled;
+            double dt = PerUnitCircuit.PERIOD / s.samplesPerPeriod() / model.omega();
+            return toWaveform(Arrays.copyOf(eventX, n), Arrays.copyOf(eventY, n), 0.0, dt);
+        }
+
+        /** Stroboscopic samples after the transient (all of them when the run ended in it), at most the last SECTION_LIMIT. */
+        private Waveform section() {
+            int first = newest > s.transientPeriods() ? s.transientPeriods() + 1 : 0;
+            first = Math.max(first, newest + 1 - SimulationResult.SECTION_LIMIT);
+            int n = newest + 1 - first;
+            double[] t = new double[n];
+            for (int j = 0; j < n; j++) {
+                t[j] = (first + j) * PerUnitCircuit.PERIOD / model.omega();
+            }
+            return new Waveform(t, scaled(Arrays.copyOfRange(xs, first, newest + 1), model.fluxBase()),
+                    scaled(Arrays.copyOfRange(ys, first, newest + 1), model.voltageBase()));
         }
 
         private double[] strobeFlux() {
@@ -317,6 +362,14 @@ public final class Simulator {
             }
             return new Waveform(t, f, v);
         }
+    }
+
+    private static double[] scaled(double[] v, double factor) {
+        double[] out = new double[v.length];
+        for (int i = 0; i < v.length; i++) {
+            out[i] = v[i] * factor;
+        }
+        return out;
     }
 
     /**

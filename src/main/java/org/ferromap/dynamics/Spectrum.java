@@ -40,6 +40,51 @@ public record Spectrum(double[] frequency, double[] amplitude, double[] phase) {
         return transform(samples, duration, scale, true);
     }
 
+    /**
+     * Spectrum of a whole number of periods of a periodic signal, any number of samples (at least
+     * 2): a direct discrete Fourier transform with an exact twiddle table, no window. For records
+     * whose length cannot be a power of two (p periods of a subharmonic at a fixed rate); O(n^2).
+     *
+     * @param samples signal samples spanning [0, duration)
+     * @param duration length of the window, s
+     * @param scale factor applied to amplitudes
+     */
+    public static Spectrum ofWholePeriods(double[] samples, double duration, double scale) {
+        int n = samples.length;
+        if (n < 2) {
+            throw new IllegalArgumentException("sample count " + n + " must be >= 2");
+        }
+        double[] cos = new double[n];
+        double[] sin = new double[n];
+        for (int j = 0; j < n; j++) {
+            cos[j] = Math.cos(2 * Math.PI * j / n);
+            sin[j] = Math.sin(2 * Math.PI * j / n);
+        }
+        int lines = n / 2;
+        double[] f = new double[lines];
+        double[] a = new double[lines];
+        double[] p = new double[lines];
+        for (int k = 0; k < lines; k++) {
+            double re = 0;
+            double im = 0;
+            int idx = 0;
+            for (int j = 0; j < n; j++) {
+                // exp(-2 pi i j k / n), index j k mod n kept without overflow
+                re += samples[j] * cos[idx];
+                im -= samples[j] * sin[idx];
+                idx += k;
+                if (idx >= n) {
+                    idx -= n;
+                }
+            }
+            f[k] = k / duration;
+            double mag = Math.hypot(re, im) / n;
+            a[k] = (k == 0 ? mag : 2 * mag) * scale;
+            p[k] = Math.atan2(im, re);
+        }
+        return new Spectrum(f, a, p);
+    }
+
     private static Spectrum transform(double[] samples, double duration, double scale, boolean hann) {
         int n = samples.length;
         if (n < 2 || Integer.bitCount(n) != 1) {

@@ -13,6 +13,12 @@
  * <li>{@link org.ferromap.dynamics.Simulator}: the run and the classification into
  * {@link org.ferromap.dynamics.SteadyMode}, with the largest Lyapunov exponent (Benettin), the
  * 0-1 test ({@link org.ferromap.dynamics.ZeroOneTest}) and the spectrum.</li>
+ * <li>{@link org.ferromap.dynamics.ModeRules}: the classification rules on recorded data, shared by
+ * the single-phase and the three-phase runs.</li>
+ * <li>{@link org.ferromap.dynamics.NetworkSimulator} and {@link org.ferromap.dynamics.NetworkClassifier}:
+ * the full three-phase network run in chunks until its stroboscopic samples repeat, and the
+ * classification of its open-phase voltage ({@link org.ferromap.dynamics.SettledState}) by
+ * recurrence, the 0-1 test and the spectrum (no Newton certification, no Lyapunov exponent).</li>
  * <li>{@link org.ferromap.dynamics.SimulationBenchmark}: the speed benchmark against the peer
  * program (GSL rk8pd).</li>
  * </ul>

@@ -27,7 +27,7 @@ public final class EquipmentCharts {
             lam[k] = top * k / n;
             i[k] = c.current(lam[k]);
         }
-        XYChart ch = ChartFiles.xyChart("Magnetizing curve: " + title, "current (A peak)", "flux linkage (Wb-turn peak)");
+        XYChart ch = ChartFiles.xyChart("Magnetizing curve held for the study", "current (A peak)", "flux linkage (Wb-turn peak)");
         XYSeries line = ch.addSeries("curve held: " + c.describe(), i, lam);
         line.setMarker(SeriesMarkers.NONE);
         line.setLineStyle(ChartFiles.solid());

@@ -1,5 +1,6 @@
 package org.ferromap.circuit;
 
+import org.ferromap.equipment.LinearCurve;
 import static org.junit.jupiter.api.Assertions.assertTrue;
 
 import org.ferromap.equipment.Connection;

@@ -1,5 +1,6 @@
 package org.ferromap.dynamics;
 
+import org.ferromap.equipment.LinearCurve;
 import static org.junit.jupiter.api.Assertions.assertEquals;
 
 import org.ferromap.circuit.EquivalentCircuit;

@@ -1,10 +1,10 @@
-package org.ferromap.circuit;
+package org.ferromap.equipment;
 
 import java.util.List;
 import org.ferromap.equipment.SaturationCurve;
 
 /** Test-local linear magnetizing branch i = lambda / L (no saturation), for linear phasor checks. */
-record LinearCurve(double inductance) implements SaturationCurve {
+public record LinearCurve(double inductance) implements SaturationCurve {
 
     @Override
     public double current(double fluxLinkage) {
