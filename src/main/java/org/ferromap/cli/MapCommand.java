@@ -90,7 +90,7 @@ final class MapCommand extends BaseCommand {
         Path dir;
         try (OutputFolder f = OutputFolder.open(target)) {
             r = StudyMap.run(plane, settings, executor, tiles, ProgressListener.forStream(err()), n);
-            MapReport.write(r, f.staging(), s.title(), List.of());
+            MapReport.write(r, f.staging(), List.of());
             dir = f.commit();
         }
         ResumeTiles.forget(tiles, r);

@@ -42,13 +42,13 @@ public final class FoldBoundaries {
         /** The ferroresonant state ends (or is born) here. */
         JUMP_DOWN("jump-down fold"),
         /** No fold pair: the single branch turns capacitive, normal becomes ferroresonant without a jump. */
-        CAPACITIVE_TURN("capacitive turn (no fold)"),
+        CAPACITIVE_TURN("capacitive turn"),
         /**
          * The fold pair is born here (the cusp condition, C = C_min for a capacitance axis): past
          * the cusp the upper branch is named ferroresonant while the single branch before it is
          * still called normal, so the category changes here although the state does not jump.
          */
-        FOLD_PAIR_BORN("fold pair born (no jump)");
+        FOLD_PAIR_BORN("fold pair born");
 
         private final String label;
 

@@ -100,11 +100,10 @@ public final class MapReport {
      *
      * @param r       the map
      * @param dir     the folder (a staging folder of an {@link OutputFolder})
-     * @param title   the study's title, for chart titles
      * @param markers extra points to mark on the balance chart (e.g. the notebook's representative cells)
      * @return the charts written, in reading order
      */
-    public static List<Figure> write(StudyMapResult r, Path dir, String title, List<MapChart.Marker> markers) {
+    public static List<Figure> write(StudyMapResult r, Path dir, List<MapChart.Marker> markers) {
         List<Figure> out = new ArrayList<>();
         PlaneAxis px = r.plane().x();
         PlaneAxis py = r.plane().y();
@@ -126,7 +125,7 @@ public final class MapReport {
             for (int i = 0; i < cat.length; i++) {
                 codes[i] = Double.isNaN(cat[i]) ? -1 : (byte) cat[i];
             }
-            MapChart.Builder b = base(r, "Steady states of the balance: " + title, xt, xs, yt, ys)
+            MapChart.Builder b = base(r, "Steady states of the balance", xt, xs, yt, ys)
                     .layer(new MapChart.Categorical(codes, BalanceCell.CATEGORY_NAMES.toArray(new String[0]),
                             new Color[] {Palette.SAFE, Palette.AT_RISK, Palette.FERRO_ONLY}));
             markers.forEach(b::marker);
@@ -142,7 +141,7 @@ public final class MapReport {
         if (r.balance() != null && r.layers().contains(MapLayer.PEAK)) {
             double[] peak = r.balance().layer(1);
             double[] range = range(peak, 1.0);
-            base(r, "Peak of the worst stable state: " + title, xt, xs, yt, ys)
+            base(r, "Peak of the worst stable state", xt, xs, yt, ys)
                     .layer(new MapChart.Continuous(peak, range[0], range[1], "peak (pu)")).build().save(dir, "peak-map");
             layerFiles(dir, "peak-map", px, py, r.balance(), new int[] {1}, new String[] {"peakVoltagePu"}, false);
             out.add(new Figure("peak-map", "Fundamental peak of the terminal voltage in the worst stable steady state, "
@@ -151,7 +150,7 @@ public final class MapReport {
         }
         if (r.time() != null) {
             String ensemble = r.settings().ensemble().describe();
-            base(r, "Share of switchings ending in ferroresonance: " + title, xt, xs, yt, ys)
+            base(r, "Share of switchings ending in ferroresonance", xt, xs, yt, ys)
                     .layer(new MapChart.Continuous(r.time().layer(0), 0, 1, "share")).build().save(dir, "ferro-fraction-map");
             int[] comps = {0, 1, 2, 3};
             String[] names = {"ferroFraction", "worstMode", "undeterminedFraction", "maxPeakPu"};
@@ -169,7 +168,7 @@ public final class MapReport {
             for (SteadyMode m : SteadyMode.values()) {
                 modeNames[m.ordinal()] = m.label();
             }
-            base(r, "Worst settled mode over the switchings: " + title, xt, xs, yt, ys)
+            base(r, "Worst settled mode over the switchings", xt, xs, yt, ys)
                     .layer(new MapChart.Categorical(codes, modeNames, MODE_COLORS)).build().save(dir, "worst-mode-map");
             layerFiles(dir, "worst-mode-map", px, py, r.time(), new int[] {1}, new String[] {"worstMode"}, true);
             out.add(new Figure("worst-mode-map", "Worst mode any switching event settled in (" + ensemble + ")"

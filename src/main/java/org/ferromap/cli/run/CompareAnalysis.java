@@ -68,6 +68,6 @@ final class CompareAnalysis implements Analysis {
         CuspCondition cu = b.cuspCondition(c);
         return new CompareSection.Row(file, s.title(), s.exactness().explanation(), c.sourcePeak() / c.ratedPeak(),
                 String.join(" + ", kinds), worst, m.hasFold() ? m.jumpUpSourcePeak() / c.ratedPeak() : Double.NaN, m.ratio(),
-                cu.capacitanceRatio(), cu.dampingConductance() > 0 ? 1 / cu.dampingConductance() : Double.POSITIVE_INFINITY);
+                cu.capacitanceRatio(), 1 / FoldFreeDamping.totalConductance(b, c));
     }
 }

@@ -49,7 +49,7 @@ final class MapAnalysis implements Analysis {
             StudyMapResult r = StudyMap.run(plane, s, new LocalPoolExecutor(c.threads), store,
                     ProgressListener.forStream(c.progress), c.threads);
             List<MapSection.Representative> reps = representatives(c, r);
-            MapSection.write(c.notebook, c.folder, c.study.title(), r, reps);
+            MapSection.write(c.notebook, c.folder, r, reps);
             c.afterCommit.add(() -> ResumeTiles.forget(store, r));
         };
     }

@@ -9,9 +9,9 @@ import org.ferromap.report.sections.Fmt;
 import org.ferromap.report.sections.SimulationSection;
 
 /**
- * {@code simulate}: one switching event in the time domain. Settings: {@code cycles} (most source
- * periods, default 2000), {@code angle} (source angle at switching, default the study's),
- * {@code residual-flux} (pu of the rated peak flux, default 0).
+ * {@code simulate}: one switching event of the equivalent circuit in the time domain. Settings:
+ * {@code cycles} (most source periods, default 2000), {@code angle} (source angle at switching,
+ * default the circuit's own), {@code residual-flux} (pu of the rated peak flux, default 0).
  */
 final class SimulateAnalysis implements Analysis {
 
@@ -26,13 +26,14 @@ final class SimulateAnalysis implements Analysis {
         int cycles = s.integer("cycles", SimulationSettings.defaults().maxPeriods(), 30, 1_000_000);
         double angle = s.angle("angle", ctx.study.circuit().sourceAngle());
         double flux = s.number("residual-flux", 0, -2, 2);
-        SimulationSettings set = SimulationSettings.defaults().withMaxPeriods(cycles).withSourceAngle(angle);
+        SimulationSettings set = SimulationSettings.defaults().withMaxPeriods(cycles)
+                .withTransientPeriods(Math.min(20, cycles / 4)).withSourceAngle(angle);
         return c -> {
             EquivalentCircuit ci = c.study.circuit();
             SimulationResult r = Simulator.simulate(ci, set.withInitialState(flux * ci.ratedPeak() / ci.omega(), 0));
-            String label = "Switched at source angle " + Fmt.deg(angle) + " with residual flux " + Fmt.sig(flux, 3)
-                    + " pu, at most " + cycles + " source periods; " + r.periodsSimulated() + " simulated";
-            SimulationSection.write(c.notebook, c.folder, new SimulationSection.Data(label, ci.ratedPeak(), r));
+            String label = "The equivalent circuit switched at source angle " + Fmt.deg(angle) + " with residual flux "
+                    + Fmt.sig(flux, 3) + " pu, at most " + cycles + " source periods (" + r.periodsSimulated() + " simulated)";
+            SimulationSection.write(c.notebook, c.folder, new SimulationSection.Data(c.study.title(), label, ci, angle, r));
         };
     }
 }

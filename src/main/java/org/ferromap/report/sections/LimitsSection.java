@@ -25,7 +25,7 @@ public final class LimitsSection {
         CriticalLengthResult r = d.result();
         nb.text("Searched from " + Fmt.si(d.fromLength(), "m") + " to " + Fmt.si(d.toLength(), "m") + " of cable, other values "
                 + "as in the study (" + Fmt.si(d.studyLength(), "m") + "); each length's own source voltage is compared with "
-                + "its folds. " + r.note() + ".");
+                + "its folds. " + capitalised(r.note()) + ".");
         nb.table(List.of("limit", "cable length"), List.of(
                 List.of("fold pair born (bistability begins)", Fmt.si(r.cuspLength(), "m")),
                 List.of("jump-down fold reaches the source (a ferroresonant state exists)", Fmt.si(r.jumpDownLength(), "m")),
@@ -34,5 +34,9 @@ public final class LimitsSection {
         Json.write(d, Figures.folder(notebook, "limits").resolve("limits.json"));
         nb.text("Data: limits/limits.json.");
         nb.end();
+    }
+
+    private static String capitalised(String s) {
+        return s == null || s.isEmpty() ? "" : Character.toUpperCase(s.charAt(0)) + s.substring(1);
     }
 }

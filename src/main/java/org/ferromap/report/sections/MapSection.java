@@ -34,7 +34,7 @@ public final class MapSection {
     public record Representative(String label, String category, double x, double y, String scenario, double ratedPeak,
             SimulationResult result) { }
 
-    public static void write(Notebook nb, Path notebook, String title, StudyMapResult r, List<Representative> reps) {
+    public static void write(Notebook nb, Path notebook, StudyMapResult r, List<Representative> reps) {
         nb.section("map", "Map over " + r.plane().x().parameter().studyName() + " and " + r.plane().y().parameter().studyName());
         nb.text("x: " + r.plane().x().axis().describe() + "; y: " + r.plane().y().axis().describe() + ".");
         stats(nb, "Balance layer", r.balance());
@@ -48,7 +48,7 @@ public final class MapSection {
         for (Representative p : reps) {
             markers.add(new MapChart.Marker(p.label(), p.x(), p.y(), new Color(0, 114, 178)));
         }
-        for (MapReport.Figure f : MapReport.write(r, dir, title, markers)) {
+        for (MapReport.Figure f : MapReport.write(r, dir, markers)) {
             List<String> files = f.dataFiles().stream().map(s -> "map/" + s).toList();
             nb.figure("map/" + f.baseName(), f.caption(), files);
         }

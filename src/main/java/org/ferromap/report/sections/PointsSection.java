@@ -7,15 +7,11 @@ import org.ferromap.balance.CuspCondition;
 import org.ferromap.balance.Fold;
 import org.ferromap.balance.FoldMargin;
 import org.ferromap.balance.OperatingPoint;
-import org.ferromap.balance.PointKind;
 import org.ferromap.circuit.EquivalentCircuit;
-import org.ferromap.report.ChartFiles;
 import org.ferromap.report.Csv;
 import org.ferromap.report.Json;
 import org.ferromap.report.Notebook;
-import org.knowm.xchart.XYChart;
-import org.knowm.xchart.XYSeries;
-import org.knowm.xchart.style.markers.SeriesMarkers;
+import org.ferromap.report.OperatingPointCharts;
 
 /**
  * Operating points at the study's source: every steady state of the balance, the folds, the
@@ -36,11 +32,9 @@ public final class PointsSection {
      * @param margin        distance to the jump-up fold
      * @param cusp          the cusp condition
      * @param foldFreeConductance total shunt conductance at which the fold pair vanishes, S (NaN when not found)
-     * @param curveCurrent  fundamental magnetizing current I1 at sampled flux amplitudes, A peak (ascending, from 0)
-     * @param curveVoltage  the terminal voltage w Lambda at the same samples, V peak
      */
     public record Data(EquivalentCircuit circuit, List<OperatingPoint> points, List<Fold> folds, FoldMargin margin,
-            CuspCondition cusp, double foldFreeConductance, double[] curveCurrent, double[] curveVoltage) { }
+            CuspCondition cusp, double foldFreeConductance) { }
 
     /** One steady state in points.json / points.csv. */
     public record PointJson(String kind, boolean stable, double terminalVoltage, double terminalVoltagePu, double flux,
@@ -53,7 +47,7 @@ public final class PointsSection {
     public record PointsJson(double sourcePeak, List<PointJson> points, List<FoldJson> folds, FoldMargin margin,
             CuspCondition cusp) { }
 
-    public static void write(Notebook nb, Path notebook, Data d) {
+    public static void write(Notebook nb, Path notebook, String title, Data d) {
         EquivalentCircuit c = d.circuit();
         nb.section("points", "Operating points at the study's source");
         nb.text("Every single-harmonic steady state at E = " + Fmt.si(c.sourcePeak(), "V") + " peak ("
@@ -102,71 +96,21 @@ public final class PointsSection {
         Csv.write(dir.resolve("points.csv"), List.of("kind", "stable", "terminal voltage (V peak)", "terminal voltage (pu)",
                 "flux (Wb-turn peak)", "current I1 (A peak)", "phase to source (deg)", "capacitive"), prow);
         Json.write(new PointsJson(c.sourcePeak(), pj, fj, m, cu), dir.resolve("points.json"));
-        graphical(nb, notebook, d);
+        double[][] curve = OperatingPointCharts.graphical(title, c, d.points(), dir, "graphical-method");
+        List<List<?>> crow = new ArrayList<>();
+        for (int i = 0; i < curve[0].length; i++) {
+            crow.add(List.of(curve[0][i], curve[1][i] * 1e3));
+        }
+        Csv.write(dir.resolve("graphical-method.csv"), List.of("fundamental current (A peak)", "voltage (V peak)"), crow);
+        Json.write(new Picture(curve[0], scale(curve[1], 1e3), pj), dir.resolve("graphical-method.json"));
+        nb.figure("points/graphical-method", "The graphical method: the magnetizing branch's fundamental voltage against its "
+                + "fundamental current, crossed by the capacitor lines of the lossless loop; the steady states the balance "
+                + "found (losses included) marked by kind", List.of("points/graphical-method.csv",
+                        "points/graphical-method.json", "points/points.csv", "points/points.json"));
         nb.end();
     }
 
-    /** The V-I picture: odd fundamental curve of the branch, the capacitor line V = E Cs/C + I/(w C), the points on it. */
-    private static void graphical(Notebook nb, Path notebook, Data d) {
-        EquivalentCircuit c = d.circuit();
-        double cap = c.totalCapacitance();
-        double eth = c.sourcePeak() * c.seriesCapacitance() / cap;
-        double xc = 1 / (c.omega() * cap);
-        int n = d.curveCurrent().length;
-        double[] ci = new double[2 * n - 1];
-        double[] cv = new double[2 * n - 1];
-        for (int i = 0; i < n; i++) {
-            ci[n - 1 + i] = d.curveCurrent()[i];
-            cv[n - 1 + i] = d.curveVoltage()[i] / 1e3;
-            ci[n - 1 - i] = -d.curveCurrent()[i];
-            cv[n - 1 - i] = -d.curveVoltage()[i] / 1e3;
-        }
-        double iMax = d.curveCurrent()[n - 1];
-        double[] li = {-iMax, iMax};
-        double[] lv = {(eth - xc * iMax) / 1e3, (eth + xc * iMax) / 1e3};
-        XYChart ch = ChartFiles.xyChart("Graphical method", "fundamental magnetizing current I1 (A peak)",
-                "terminal voltage (kV peak)");
-        XYSeries curve = ch.addSeries("magnetizing branch, fundamental", ci, cv);
-        curve.setMarker(SeriesMarkers.NONE);
-        curve.setLineStyle(ChartFiles.solid());
-        XYSeries line = ch.addSeries("capacitor line V = E Cs/C + I/(w C)", li, lv);
-        line.setMarker(SeriesMarkers.NONE);
-        line.setLineStyle(ChartFiles.dashed());
-        List<double[]> pts = new ArrayList<>();
-        for (PointKind kind : PointKind.values()) {
-            List<Double> xs = new ArrayList<>();
-            List<Double> ys = new ArrayList<>();
-            for (OperatingPoint p : d.points()) {
-                if (p.kind() == kind) {
-                    double sign = p.capacitive() ? -1 : 1;
-                    xs.add(sign * p.current());
-                    ys.add(sign * p.voltage() / 1e3);
-                    pts.add(new double[] {sign * p.current(), sign * p.voltage()});
-                }
-            }
-            if (!xs.isEmpty()) {
-                ChartFiles.markers(ch, kind.label() + " point", xs.stream().mapToDouble(Double::doubleValue).toArray(),
-                        ys.stream().mapToDouble(Double::doubleValue).toArray(),
-                        ChartFiles.PALETTE[2 + kind.ordinal()]);
-            }
-        }
-        ch.getStyler().setLegendPosition(org.knowm.xchart.style.Styler.LegendPosition.InsideSE);
-        List<List<?>> rows = new ArrayList<>();
-        for (int i = 0; i < ci.length; i++) {
-            rows.add(List.of("curve", ci[i], cv[i] * 1e3));
-        }
-        rows.add(List.of("line", li[0], lv[0] * 1e3));
-        rows.add(List.of("line", li[1], lv[1] * 1e3));
-        for (double[] p : pts) {
-            rows.add(List.of("point", p[0], p[1]));
-        }
-        record Picture(double[] curveCurrent, double[] curveVoltage, double theveninSource, double capacitorReactance) { }
-        Figures.xy(nb, notebook, "points", "graphical-method", ch, "The graphical method: the magnetizing branch's "
-                + "fundamental V-I curve (odd) against the capacitor line; each crossing is a steady state (points drawn "
-                + "where the balance puts them, capacitive ones mirrored into the third quadrant). The line leaves out the "
-                + "loss, which the points include.", List.of("series", "current (A peak)", "voltage (V peak)"), rows,
-                new Picture(ci, scale(cv, 1e3), eth, xc));
-    }
+    private record Picture(double[] currentA, double[] voltageV, List<PointJson> points) { }
 
     private static double[] scale(double[] v, double f) {
         double[] o = new double[v.length];
