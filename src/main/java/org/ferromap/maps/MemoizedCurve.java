@@ -36,7 +36,7 @@ final class MemoizedCurve implements SaturationCurve {
 
     /** The curve wrapped for the balance, or the curve itself when the balance has a special path for its type. */
     static SaturationCurve wrap(SaturationCurve c) {
-        if (Boolean.getBoolean("nomemo") || c instanceof PolynomialCurve || c instanceof PiecewiseLinearCurve || c instanceof TabulatedCurve
+        if (c instanceof PolynomialCurve || c instanceof PiecewiseLinearCurve || c instanceof TabulatedCurve
                 || c instanceof MemoizedCurve) {
             return c;
         }
