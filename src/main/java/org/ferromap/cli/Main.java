@@ -21,6 +21,8 @@ import picocli.CommandLine.Command;
             FoldsCommand.class,
             SimulateCommand.class,
             BenchCommand.class,
+            OrbitsCommand.class,
+            SweepCommand.class,
             MapCommand.class,
             RunCommand.class,
         })

@@ -16,7 +16,10 @@
  * <li>{@link org.ferromap.orbits.BruteForceSweep}: up and down runs carrying the state.</li>
  * <li>{@link org.ferromap.orbits.CircuitOrbits}: the same for an equivalent circuit in SI, with the
  * JSON records of the contract ({@link org.ferromap.orbits.OrbitsReport},
- * {@link org.ferromap.orbits.SweepReport}).</li>
+ * {@link org.ferromap.orbits.SweepReport}); exploration and sweeps over any family of circuits
+ * (a function of the parameter, such as an equipment-level one re-reduced for each value), seeded
+ * by settled states and by the harmonic-balance steady states; {@link org.ferromap.orbits.OrbitExtent}:
+ * an orbit followed over its period for its peaks and its (and its mirror image's) section states.</li>
  * </ul>
  * May use: dynamics, continuation, balance, circuit, equipment, errors, Hipparchus.
  */
