@@ -33,16 +33,16 @@ import org.ferromap.study.StudyReader;
  * them for each of {@code limits}, {@code compare}, {@code damping}, {@code odds} that a study's
  * {@code analyses:} lists, with the settings written there.
  */
-final class DeliverableSections {
+public final class DeliverableSections {
 
     /** The analyses these sections serve, as study files name them. */
-    static final List<String> NAMES = List.of("limits", "compare", "damping", "odds");
+    public static final List<String> NAMES = List.of("limits", "compare", "damping", "odds");
 
     private DeliverableSections() {
     }
 
     /** The section of one analysis with the study's own settings; {@code nb} may be null. */
-    static Object section(String analysis, Study study, CellExecutor executor, Path dir, Notebook nb) {
+    public static Object section(String analysis, Study study, CellExecutor executor, Path dir, Notebook nb) {
         return switch (analysis) {
             case "limits" -> limits(study, LimitSettings.from(study), executor, dir, nb);
             case "compare" -> compare(study, executor, dir, nb);
@@ -53,7 +53,7 @@ final class DeliverableSections {
         };
     }
 
-    static LimitTableResult limits(Study study, LimitSettings settings, CellExecutor executor, Path dir, Notebook nb) {
+    public static LimitTableResult limits(Study study, LimitSettings settings, CellExecutor executor, Path dir, Notebook nb) {
         LimitTableResult r = LimitTable.compute(study, settings, executor);
         LimitReport.write(r, dir, "limits");
         if (nb != null) {
@@ -63,7 +63,7 @@ final class DeliverableSections {
     }
 
     /** The comparison of a study with the studies its {@code analyses: compare: with:} names. */
-    static ComparisonResult compare(Study study, CellExecutor executor, Path dir, Notebook nb) {
+    public static ComparisonResult compare(Study study, CellExecutor executor, Path dir, Notebook nb) {
         ComparisonSettings settings = ComparisonSettings.from(study);
         if (settings.with().isEmpty()) {
             throw new FerromapException(MessageKey.MISSING_KEY, study.file() + ": analyses.compare.with is missing; name the "
@@ -77,7 +77,7 @@ final class DeliverableSections {
         return compare(studies, settings, executor, dir, nb);
     }
 
-    static ComparisonResult compare(List<Study> studies, ComparisonSettings settings, CellExecutor executor, Path dir, Notebook nb) {
+    public static ComparisonResult compare(List<Study> studies, ComparisonSettings settings, CellExecutor executor, Path dir, Notebook nb) {
         ComparisonResult r = CoreComparison.compare(studies, settings, executor);
         ComparisonReport.write(r, dir, "compare");
         if (nb != null) {
@@ -86,7 +86,7 @@ final class DeliverableSections {
         return r;
     }
 
-    static DampingResult damping(Study study, DampingSettings settings, CellExecutor executor, Path dir, Notebook nb) {
+    public static DampingResult damping(Study study, DampingSettings settings, CellExecutor executor, Path dir, Notebook nb) {
         DampingResult r = DampingSizing.size(study, settings, executor);
         DampingReport.write(r, dir, "damping");
         if (nb != null) {
@@ -95,7 +95,7 @@ final class DeliverableSections {
         return r;
     }
 
-    static OddsResult odds(Study study, OddsSettings settings, CellExecutor executor, Path dir, Notebook nb) {
+    public static OddsResult odds(Study study, OddsSettings settings, CellExecutor executor, Path dir, Notebook nb) {
         OddsResult r = SwitchingOdds.estimate(study, settings, executor);
         OddsReport.write(r, dir, "odds");
         if (nb != null) {

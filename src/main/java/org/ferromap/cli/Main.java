@@ -23,6 +23,8 @@ import picocli.CommandLine.Command;
             BenchCommand.class,
             OrbitsCommand.class,
             SweepCommand.class,
+            MapCommand.class,
+            RunCommand.class,
             LimitsCommand.class,
             CompareCommand.class,
             DampingCommand.class,

@@ -150,7 +150,17 @@ public final class ModeRules {
      * @param peakThreshold peak above which the state is ferroresonant whatever its phase, per unit
      */
     public static Verdict periodOne(double phase, double peakPerUnit, double peakThreshold) {
-        boolean antiphase = Math.abs(phase) > Math.PI / 2;
+        return periodOne(phase, peakPerUnit, peakThreshold, false);
+    }
+
+    /**
+     * As {@link #periodOne(double, double, double)}, knowing whether the unsaturated loop already
+     * puts the terminal in antiphase with the source (v/e = w^2 Cs / (w^2 C - a) &lt; 0 when the
+     * magnetizing slope a exceeds w^2 C). Then the phase tells nothing and only the peak threshold
+     * separates normal from ferroresonant.
+     */
+    public static Verdict periodOne(double phase, double peakPerUnit, double peakThreshold, boolean antiphaseWhenLinear) {
+        boolean antiphase = Math.abs(phase) > Math.PI / 2 && !antiphaseWhenLinear;
         boolean high = peakPerUnit > peakThreshold;
         if (antiphase) {
             return new Verdict(SteadyMode.FUNDAMENTAL,

@@ -55,6 +55,9 @@ public final class Simulator {
         EquivalentCircuit c = Double.isNaN(settings.sourceAngle()) ? circuit : circuit.withSourceAngle(settings.sourceAngle());
         PerUnitCircuit model = PerUnitCircuit.of(c);
         Run run = new Run(model, settings);
+        // Below the knee, v/e = w^2 Cs / (w^2 C - a): when the magnetizing slope a exceeds w^2 C
+        // (kappa < 0, DOMAIN.md §3) even the normal, unsaturated state is in antiphase.
+        run.antiphaseWhenLinear = c.omega() * c.omega() * c.totalCapacitance() < c.magnetizing().currentSlope(0.0);
         try {
             return run.execute();
         } catch (FerromapException e) {
@@ -71,6 +74,8 @@ public final class Simulator {
     /** The mutable state of one simulation. */
     private static final class Run {
         private final PerUnitCircuit model;
+        /** Whether the unsaturated loop already puts the terminal in antiphase with the source. */
+        private boolean antiphaseWhenLinear;
         private final SimulationSettings s;
         private final DormandPrince853 plain;
         private final DormandPrince853 tangent;
@@ -251,7 +256,7 @@ public final class Simulator {
                 // Line 1 is the fundamental; its phase is that of a cosine at tau = 0. The source
                 // e = E sin(tau + phi) is a cosine of phase phi - pi/2.
                 phase = wrap(spectrum.phase()[1] - (model.phase() - Math.PI / 2));
-                ModeRules.Verdict v = ModeRules.periodOne(phase, peak, s.peakThreshold());
+                ModeRules.Verdict v = ModeRules.periodOne(phase, peak, s.peakThreshold(), antiphaseWhenLinear);
                 mode = v.mode();
                 note = v.reason();
             } else {

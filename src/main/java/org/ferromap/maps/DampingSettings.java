@@ -16,7 +16,7 @@ import org.ferromap.units.Quantity;
  * @param voltage        supply line-to-line voltage, V rms (equipment studies) or source peak, V
  *                       (circuit studies); NaN for the study's own
  * @param ensemble       switching events that must all settle in the normal state; default 8 angles x
- *                       residual flux 0 and +-0.8 pu
+ *                       residual flux 0 and +-0.8 pu, at most 600 periods each ({@code max-periods} in studies)
  * @param stepFactor     factor on the total conductance from one confirmation step to the next, &gt; 1;
  *                       default 1.25
  * @param maxSteps       confirmation steps after the cusp value, at least 1; default 6
@@ -69,7 +69,8 @@ public record DampingSettings(double length, double voltage, SwitchingEnsemble e
         DampingSettings d = defaults();
         AnalysisBlock b = AnalysisBlock.of(study, "damping");
         b.allowOnly("length", "voltage", "angles", "residual-flux", "step", "max-steps", "undamped", "arrester",
-                "event-duration");
+                "event-duration", "max-periods");
+        int maxPeriods = b.integer("max-periods", d.ensemble.simulation().maxPeriods(), 30, 1_000_000);
         double length = b.quantity("length", Dimension.LENGTH, Double.NaN);
         if (b.has("length") && !study.isEquipmentForm()) {
             b.problem("length", b.raw("length"), "needs an equipment-form study (a circuit study has no cable length)",
@@ -142,8 +143,8 @@ public record DampingSettings(double length, double voltage, SwitchingEnsemble e
             }
         }
         b.throwIfAny();
-        return new DampingSettings(length, voltage, d.ensemble.withAngles(angles).withResidualFluxes(flux), step, maxSteps,
-                undamped, arrester, duration);
+        return new DampingSettings(length, voltage, d.ensemble.withAngles(angles).withResidualFluxes(flux)
+                .withSimulation(d.ensemble.simulation().withMaxPeriods(maxPeriods)), step, maxSteps, undamped, arrester, duration);
     }
 
     /**

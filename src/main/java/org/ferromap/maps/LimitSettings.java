@@ -263,7 +263,8 @@ public record LimitSettings(
                 confirm = Confirmation.defaults();
             } else if (!Boolean.FALSE.equals(v)) {
                 AnalysisBlock c = b.block("confirm");
-                c.allowOnly("fraction", "angles", "residual-flux");
+                c.allowOnly("fraction", "angles", "residual-flux", "max-periods");
+                int maxPeriods = c.integer("max-periods", SwitchingEnsemble.DEFAULT_MAX_PERIODS, 30, 1_000_000);
                 Confirmation dc = Confirmation.defaults();
                 double fraction = c.number("fraction", dc.fraction());
                 int angles = c.integer("angles", dc.ensemble().angles(), 1, 720);
@@ -277,7 +278,8 @@ public record LimitSettings(
                     }
                 }
                 if (!c.failed()) {
-                    confirm = new Confirmation(fraction, new SwitchingEnsemble(angles, flux, SwitchingEnsemble.defaultSimulation()));
+                    confirm = new Confirmation(fraction, new SwitchingEnsemble(angles, flux,
+                            SwitchingEnsemble.defaultSimulation().withMaxPeriods(maxPeriods)));
                 }
             }
         }

@@ -25,7 +25,8 @@ import org.ferromap.units.Dimension;
  *                      default 0.8 ({@link SwitchingEnsemble#DEFAULT_RESIDUAL_FLUX})
  * @param length        cable length, m; NaN for the study's
  * @param voltage       supply line-to-line voltage V rms (equipment) or source peak V (circuit); NaN for the study's
- * @param simulation    how each run is simulated
+ * @param simulation    how each run is simulated; default {@link SwitchingEnsemble#defaultSimulation()} (at most
+ *                      600 periods, {@code max-periods} in studies)
  */
 public record OddsSettings(int runs, long seed, double confidence, BinomialInterval.Method method, double precision,
                            int maxRuns, double residualFlux, double length, double voltage, SimulationSettings simulation) {
@@ -80,7 +81,9 @@ public record OddsSettings(int runs, long seed, double confidence, BinomialInter
     public static OddsSettings from(Study study) {
         OddsSettings d = defaults();
         AnalysisBlock b = AnalysisBlock.of(study, "odds");
-        b.allowOnly("runs", "seed", "confidence", "method", "precision", "max-runs", "residual-flux", "length", "voltage");
+        b.allowOnly("runs", "seed", "confidence", "method", "precision", "max-runs", "residual-flux", "length", "voltage",
+                "max-periods");
+        int maxPeriods = b.integer("max-periods", d.simulation.maxPeriods(), 30, 1_000_000);
         int maxRuns = b.integer("max-runs", d.maxRuns, 1, 10_000_000);
         int runs = b.integer("runs", Math.min(d.runs, maxRuns), 1, maxRuns);
         long seed = d.seed;
@@ -123,7 +126,7 @@ public record OddsSettings(int runs, long seed, double confidence, BinomialInter
         }
         b.throwIfAny();
         return new OddsSettings(runs, seed, confidence, BinomialInterval.Method.of(m), precision, maxRuns, flux, length, voltage,
-                d.simulation);
+                d.simulation.withMaxPeriods(maxPeriods));
     }
 
     public OddsSettings withRuns(int n) {

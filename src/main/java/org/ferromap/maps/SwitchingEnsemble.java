@@ -81,6 +81,10 @@ public record SwitchingEnsemble(int angles, double[] residualFluxes, SimulationS
         return new SwitchingEnsemble(angles, r, simulation);
     }
 
+    public SwitchingEnsemble withSimulation(SimulationSettings s) {
+        return new SwitchingEnsemble(angles, residualFluxes, s);
+    }
+
     /** Signed residual fluxes at one angle, pu: 0, then +r, -r for each r &gt; 0. */
     public double[] signedFluxes() {
         List<Double> out = new ArrayList<>();

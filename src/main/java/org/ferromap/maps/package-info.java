@@ -11,8 +11,14 @@
  * {@link org.ferromap.maps.MapGrid}: one row-major double array plus a computed/inferred flag per
  * cell. {@link org.ferromap.maps.Boundaries} finds where a category changes.
  *
- * <p>The engine does not depend on the physics: balance and time-domain cells are plugged in as
- * cell functions by the layers above.
+ * <p>The engine does not depend on the physics. The study maps built on it do: a
+ * {@link org.ferromap.maps.StudyPlane} (two study parameters, the circuit at any point),
+ * {@link org.ferromap.maps.BalanceCell} (category and peak from the single-harmonic balance),
+ * {@link org.ferromap.maps.TimeDomainCell} (an ensemble of switching events per cell,
+ * {@link org.ferromap.maps.EnsembleSettings}), {@link org.ferromap.maps.FoldBoundaries} (fold
+ * curves and cusps located by bisection) and {@link org.ferromap.maps.StudyMap}, which runs the
+ * layers asked for ({@link org.ferromap.maps.MapLayer}, {@link org.ferromap.maps.StudyMapSettings})
+ * into a {@link org.ferromap.maps.StudyMapResult}.
  *
  * <p>The users' deliverables are computed here too, on the same executors (docs/DELIVERABLES.md):
  * cable-length limit tables ({@link org.ferromap.maps.LimitTable}, {@link org.ferromap.maps.FoldLimit}),

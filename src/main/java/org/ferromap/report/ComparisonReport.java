@@ -41,9 +41,9 @@ public final class ComparisonReport {
         for (ComparisonResult.Design d : ds) {
             List<Object> c = new ArrayList<>(List.of(d.rank(), d.study(), d.rating(), d.excitingCurrent(), d.noLoadLoss(),
                     d.length(), d.lineVoltage(), d.category(), d.worstPeakPu(), d.jumpUpSourcePeak(), d.jumpUpMargin(),
-                    d.jumpDownSourcePeak(), Figures.lengthCell(d.cuspLength())));
+                    d.jumpDownSourcePeak(), Formats.lengthCell(d.cuspLength())));
             for (int k = 0; k < nm; k++) {
-                c.add(Figures.lengthCell(d.limits().get(k).length()));
+                c.add(Formats.lengthCell(d.limits().get(k).length()));
             }
             c.addAll(List.of(d.cuspConductance(), d.dampingLoad(), d.riskShare(), d.curve()));
             rows.add(c);
@@ -84,18 +84,18 @@ public final class ComparisonReport {
         header.addAll(List.of("damping load", "map at risk"));
         List<List<String>> rows = new ArrayList<>();
         for (ComparisonResult.Design d : r.designs()) {
-            List<String> c = new ArrayList<>(List.of(d.study(), Figures.percent(d.excitingCurrent()), Figures.num(d.noLoadLoss()) + " W",
-                    d.category(), Figures.num(d.worstPeakPu()) + " pu", Figures.num(d.jumpUpMargin()), Figures.length(d.cuspLength())));
+            List<String> c = new ArrayList<>(List.of(d.study(), Formats.percent(d.excitingCurrent()), Formats.num(d.noLoadLoss()) + " W",
+                    d.category(), Formats.num(d.worstPeakPu()) + " pu", Formats.num(d.jumpUpMargin()), Formats.length(d.cuspLength())));
             for (LimitRow.MarginLimit m : d.limits()) {
-                c.add(Figures.length(m.length()));
+                c.add(Formats.length(m.length()));
             }
-            c.add(Figures.kw(d.dampingLoad()));
-            c.add(Figures.percent(d.riskShare()));
+            c.add(Formats.kw(d.dampingLoad()));
+            c.add(Formats.percent(d.riskShare()));
             rows.add(c);
         }
         nb.table(header, rows);
         nb.figure(prefix + "-curves", "Magnetizing curves of the designs, per unit of each winding's rated peak flux and current",
-                List.of(prefix + "-curves.csv"));
+                List.of(prefix + "-curves.csv", prefix + ".json"));
         for (int i = 0; i < r.designs().size(); i++) {
             nb.figure(prefix + "-map-" + (i + 1), "Worst stable state (pu), " + r.designs().get(i).study()
                     + ": same axes and colour scale for every design; the installed case marked",

@@ -67,35 +67,36 @@ public final class DampingReport {
     /** The notebook section (files written by {@link #write} with the same prefix). */
     public static void section(DampingResult r, Notebook nb, String prefix) {
         nb.section(prefix, "Damping (mitigation sizing)");
-        String where = Double.isNaN(r.length()) ? String.format(Locale.ROOT, "source %s peak", Figures.kv(r.voltage()))
-                : String.format(Locale.ROOT, "%s of cable, supply %s", Figures.length(r.length()), Figures.kv(r.voltage()));
-        nb.text("Case: " + where + ". G_min from the cusp condition: " + Figures.num(r.cuspConductance()) + " S ("
-                + r.cuspMethod() + "); the loop's own conductance " + Figures.num(r.existingConductance()) + " S"
+        String where = Double.isNaN(r.length()) ? String.format(Locale.ROOT, "source %s peak", Formats.kv(r.voltage()))
+                : String.format(Locale.ROOT, "%s of cable, supply %s", Formats.length(r.length()), Formats.kv(r.voltage()));
+        nb.text("Case: " + where + ". G_min from the cusp condition: " + Formats.num(r.cuspConductance()) + " S ("
+                + r.cuspMethod() + "); the loop's own conductance " + Formats.num(r.existingConductance()) + " S"
                 + (r.bistableAsBuilt() ? ", bistable as built." : ", no fold pair as built."));
         List<String> items = new ArrayList<>();
-        items.add("Added conductance to reach G_min: " + Figures.num(r.addedConductance()) + " S"
-                + (Double.isNaN(r.loadPower()) ? "" : " = a balanced three-phase resistive load of " + Figures.kw(r.loadPower())
-                + " (" + Figures.num(r.loadPercent()) + " % of rating) at rated voltage, or "
-                + Figures.num(r.phaseResistance()) + " ohm per phase (wye-equivalent) at the primary"));
-        items.add("At this voltage alone no stable ferroresonant state is left from " + Figures.num(r.voltageConductance()) + " S"
-                + (Double.isNaN(r.voltageLoadPower()) ? "" : " (" + Figures.kw(r.voltageLoadPower()) + ")")
+        items.add("Added conductance to reach G_min: " + Formats.num(r.addedConductance()) + " S"
+                + (Double.isNaN(r.loadPower()) ? "" : " = a balanced three-phase resistive load of " + Formats.kw(r.loadPower())
+                + " (" + Formats.num(r.loadPercent()) + " % of rating) at rated voltage, or "
+                + Formats.num(r.phaseResistance()) + " ohm per phase (wye-equivalent) at the primary"));
+        items.add("At this voltage alone no stable ferroresonant state is left from " + Formats.num(r.voltageConductance()) + " S"
+                + (Double.isNaN(r.voltageLoadPower()) ? "" : " (" + Formats.kw(r.voltageLoadPower()) + ")")
                 + ": for information; below G_min a voltage rise or another switching sequence can still reach it.");
         DampingResult.Step rec = r.recommended();
         items.add(rec == null ? "No step cleared every switching event: see the table and the notes."
                 : "Recommended (first step with every event normal): " + rec.label() + ", total "
-                + Figures.num(rec.totalConductance()) + " S" + (Double.isNaN(rec.loadPower()) ? "" : ", load " + Figures.kw(rec.loadPower())));
+                + Formats.num(rec.totalConductance()) + " S" + (Double.isNaN(rec.loadPower()) ? "" : ", load " + Formats.kw(rec.loadPower())));
         nb.list(items);
         List<List<String>> rows = new ArrayList<>();
         for (DampingResult.Step s : r.steps()) {
-            rows.add(List.of(s.label(), Figures.num(s.totalConductance()) + " S", Figures.kw(s.loadPower()),
+            rows.add(List.of(s.label(), Formats.num(s.totalConductance()) + " S", Formats.kw(s.loadPower()),
                     s.ferroresonant() + " of " + s.events(), Integer.toString(s.undetermined()),
-                    s.worstMode() == null ? "-" : s.worstMode(), Figures.num(s.worstPeakPu()), s.clear() ? "yes" : "no"));
+                    s.worstMode() == null ? "-" : s.worstMode(), Formats.num(s.worstPeakPu()), s.clear() ? "yes" : "no"));
         }
         nb.table(List.of("step", "conductance", "load", "ferroresonant", "undetermined", "worst mode", "worst peak (pu)", "clear"),
                 rows);
         nb.text("Switching events of each step: " + r.ensemble() + ".");
         if (!r.steps().isEmpty()) {
-            nb.figure(prefix + "-steps", "Settled states of the switching events at each step", List.of(prefix + "-steps.csv"));
+            nb.figure(prefix + "-steps", "Settled states of the switching events at each step",
+                    List.of(prefix + "-steps.csv", prefix + ".json"));
         }
         DampingResult.Arrester a = r.arrester();
         if (a != null) {
@@ -105,12 +106,12 @@ public final class DampingReport {
                 ArresterDuty.Result d = a.duty();
                 nb.text(String.format(Locale.ROOT, "Arrester (Ur %s, V_ref %s peak, I_ref %s A, alpha %s) on the open phase during "
                                 + "the worst as-built event (peak %s pu without it): %s J per cycle, %s W; %s J over %s s against %s J "
-                                + "rated: %s.", Figures.kv(a.ratedVoltage()), Figures.kv(a.referenceVoltage()),
-                        Figures.num(a.referenceCurrent()), Figures.num(a.alpha()), Figures.num(a.peakWithoutArrester()),
-                        Figures.num(d.energyPerCycle()), Figures.num(d.meanPower()), Figures.num(d.eventEnergy()),
-                        Figures.num(d.eventDuration()), Figures.num(d.capability()), d.note()));
+                                + "rated: %s.", Formats.kv(a.ratedVoltage()), Formats.kv(a.referenceVoltage()),
+                        Formats.num(a.referenceCurrent()), Formats.num(a.alpha()), Formats.num(a.peakWithoutArrester()),
+                        Formats.num(d.energyPerCycle()), Formats.num(d.meanPower()), Formats.num(d.eventEnergy()),
+                        Formats.num(d.eventDuration()), Formats.num(d.capability()), d.note()));
                 nb.figure(prefix + "-arrester", "Arrester voltage and current over one settled cycle",
-                        List.of(prefix + "-arrester.csv"));
+                        List.of(prefix + "-arrester.csv", prefix + ".json"));
             }
             nb.list(a.sources());
         }

@@ -40,13 +40,13 @@ public final class LimitReport {
         for (LimitRow row : rows) {
             List<Object> c = new ArrayList<>(List.of(row.rating(), row.voltage(), row.connection(), row.cable(), row.openPhases(),
                     row.excitingCurrent(), row.excitingCurrentSource(), row.noLoadLoss(), row.noLoadLossSource(), row.exactness(),
-                    row.driven(), Figures.lengthCell(row.cuspLength())));
+                    row.driven(), Formats.lengthCell(row.cuspLength())));
             for (LimitRow.MarginLimit m : row.limits()) {
-                c.add(Figures.lengthCell(m.length()));
+                c.add(Formats.lengthCell(m.length()));
             }
             c.add(row.linearK());
-            c.add(Figures.lengthCell(row.linearLength()));
-            c.add(Figures.lengthCell(row.linearResonanceLength()));
+            c.add(Formats.lengthCell(row.linearLength()));
+            c.add(Formats.lengthCell(row.linearResonanceLength()));
             LimitRow.Check ch = row.check();
             c.add(ch == null ? null : ch.length());
             c.add(ch == null ? null : ch.events());
@@ -76,14 +76,14 @@ public final class LimitReport {
         header.addAll(List.of("linear K", "linear resonance", "check", "exactness"));
         List<List<String>> cells = new ArrayList<>();
         for (LimitRow row : rows) {
-            List<String> c = new ArrayList<>(List.of(Figures.kva(row.rating()), Figures.kv(row.voltage()), row.connection(),
-                    row.cable(), Integer.toString(row.openPhases()), Figures.percent(row.excitingCurrent()),
-                    Figures.num(row.noLoadLoss()) + " W"));
+            List<String> c = new ArrayList<>(List.of(Formats.kva(row.rating()), Formats.kv(row.voltage()), row.connection(),
+                    row.cable(), Integer.toString(row.openPhases()), Formats.percent(row.excitingCurrent()),
+                    Formats.num(row.noLoadLoss()) + " W"));
             for (LimitRow.MarginLimit m : row.limits()) {
-                c.add(Figures.length(m.length()));
+                c.add(Formats.length(m.length()));
             }
-            c.add(Figures.length(row.linearLength()) + " (K " + Figures.num(row.linearK()) + ")");
-            c.add(Figures.length(row.linearResonanceLength()));
+            c.add(Formats.length(row.linearLength()) + " (K " + Formats.num(row.linearK()) + ")");
+            c.add(Formats.length(row.linearResonanceLength()));
             LimitRow.Check ch = row.check();
             c.add(ch == null ? "-" : ch.confirmed() ? "confirmed (" + ch.events() + " events)"
                     : ch.offBranch() + " of " + ch.events() + " off the predicted state");
@@ -106,11 +106,11 @@ public final class LimitReport {
         Map<String, List<LimitRow>> groups = new LinkedHashMap<>();
         for (LimitRow row : r.rows()) {
             String key = String.format(Locale.ROOT, "%s, %s, %d open, %s", row.cable(), row.connection(), row.openPhases(),
-                    Figures.kv(row.voltage()));
+                    Formats.kv(row.voltage()));
             groups.computeIfAbsent(key, k -> new ArrayList<>()).add(row);
         }
         double k = r.rows().isEmpty() ? Double.NaN : r.rows().get(0).linearK();
-        XYChart c = ChartFiles.xyChart("Cable-length limit at rated voltage (dashed: linear criterion, K = " + Figures.num(k) + ")",
+        XYChart c = ChartFiles.xyChart("Cable-length limit at rated voltage (dashed: linear criterion, K = " + Formats.num(k) + ")",
                 "transformer rating (kVA)", "cable length (m)");
         c.getStyler().setXAxisLogarithmic(true);
         c.getStyler().setYAxisLogarithmic(true);

@@ -49,6 +49,12 @@ public final class Notebook {
         return this;
     }
 
+    /** A sub-heading inside the current section (escaped). */
+    public Notebook heading(String s) {
+        body.add("<h3>" + esc(s) + "</h3>");
+        return this;
+    }
+
     /** A paragraph of plain text (escaped). */
     public Notebook text(String s) {
         body.add("<p>" + esc(s) + "</p>");

@@ -55,7 +55,7 @@ public final class OddsReport {
         nb.figure(prefix + "-estimate", "Estimate and confidence interval as runs accumulate", List.of(prefix + "-runs.csv",
                 prefix + ".json"));
         nb.figure(prefix + "-runs", "Every run by switching angle and residual flux, coloured by the settled mode",
-                List.of(prefix + "-runs.csv"));
+                List.of(prefix + "-runs.csv", prefix + ".json"));
         nb.list(r.notes());
         nb.end();
     }

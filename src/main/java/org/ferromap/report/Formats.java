@@ -3,9 +3,9 @@ package org.ferromap.report;
 import java.util.Locale;
 
 /** Number formats shared by the deliverable reports (tables and captions). */
-final class Figures {
+final class Formats {
 
-    private Figures() {
+    private Formats() {
     }
 
     /** A length for tables: "33.0 m", "1.85 km", "none" for infinity, "-" for NaN. */
