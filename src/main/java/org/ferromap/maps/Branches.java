@@ -3,24 +3,15 @@ package org.ferromap.maps;
 import java.util.ArrayList;
 import java.util.List;
 import org.ferromap.balance.OperatingPoint;
-import org.ferromap.balance.PointKind;
 import org.ferromap.balance.SingleHarmonicBalance;
 import org.ferromap.circuit.EquivalentCircuit;
-import org.ferromap.dynamics.SimulationResult;
-import org.ferromap.dynamics.SteadyMode;
 import org.ferromap.errors.FerromapException;
 
 /**
- * Tells which branch of the balance a simulated period-1 state lies on (DOMAIN.md §6: tell the
- * normal state from fundamental ferroresonance by branch and a peak threshold).
- *
- * <p>Why it is needed: the simulator calls every period-1 state in antiphase with the source
- * fundamental ferroresonance. Past the loop's linear resonance that is the ferroresonant branch,
- * but on a cable shorter than resonance the normal state itself is in antiphase (a series LC below
- * resonance: the inductor's voltage opposes the source), small and unique, and the balance calls
- * it normal. So a period-1 state the simulator calls fundamental is counted normal here when its
- * peak is below the threshold and its fundamental phase lies nearest a stable normal point of
- * the balance, within {@link #PHASE_MATCH}. Events keep the simulator's own verdict beside it.
+ * Which stable single-harmonic state a simulated period-1 state is (DOMAIN.md §6: tell states apart
+ * by branch): the stable point of the balance whose phase is nearest the simulated fundamental's.
+ * The limit table's time-domain check uses it to see that switching events just below a limit
+ * settle on the single state the balance predicts there.
  */
 final class Branches {
 
@@ -66,18 +57,5 @@ final class Branches {
     /** Wrapped phase distance, rad in [0, pi]. */
     static double distance(double a, double b) {
         return Math.abs(Math.IEEEremainder(a - b, 2 * Math.PI));
-    }
-
-    /** The settled mode with period-1 states assigned by branch (see the class notes). */
-    static SteadyMode mode(SimulationResult r, List<OperatingPoint> stable, double peakThreshold) {
-        if (r.mode() != SteadyMode.FUNDAMENTAL || r.period() != 1 || !(r.peakPerUnit() <= peakThreshold)
-                || Double.isNaN(r.fundamentalPhase())) {
-            return r.mode();
-        }
-        OperatingPoint p = nearest(r.fundamentalPhase(), stable);
-        if (p != null && p.kind() == PointKind.NORMAL && distance(r.fundamentalPhase(), p.voltagePhase()) <= PHASE_MATCH) {
-            return SteadyMode.NORMAL;
-        }
-        return r.mode();
     }
 }

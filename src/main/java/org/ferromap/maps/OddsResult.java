@@ -48,13 +48,11 @@ public record OddsResult(String study, double length, double voltage, long seed,
      * @param index         run index (its draws come from the seed and this index only)
      * @param angle         source angle at switching, rad in [0, 2 pi)
      * @param residualFlux  residual flux at switching, pu of rated peak flux
-     * @param mode          settled mode, period-1 states assigned by the balance's branch
-     * @param simulatorMode the simulator's own verdict
+     * @param mode          settled mode
      * @param period        period in source periods (0 if not periodic)
      * @param peakPerUnit   peak terminal voltage settled, pu of the loop's rated peak
      */
-    public record Run(int index, double angle, double residualFlux, String mode, String simulatorMode, int period,
-                      double peakPerUnit) { }
+    public record Run(int index, double angle, double residualFlux, String mode, int period, double peakPerUnit) { }
 
     /** The estimate after {@code runs} runs, with its interval. */
     public record Checkpoint(int runs, double probability, double lower, double upper) { }

@@ -121,15 +121,14 @@ public record SwitchingEnsemble(int angles, double[] residualFluxes, SimulationS
      *
      * @param angle source angle at switching, rad
      * @param residualFlux residual flux at switching, pu of rated peak flux
-     * @param mode settled mode, period-1 states assigned by branch ({@code Branches})
-     * @param simulatorMode the simulator's own verdict (differs for antiphase normal states on short cables)
+     * @param mode settled mode
      * @param period period in source periods (0 when not periodic)
      * @param peakPerUnit peak terminal voltage in the settled window, pu of rated peak
      * @param phase phase of the fundamental relative to the source, rad (NaN unless period 1)
      * @param mirrored whether the result was taken from the mirror event
      */
-    public record Event(double angle, double residualFlux, SteadyMode mode, SteadyMode simulatorMode, int period,
-                        double peakPerUnit, double phase, boolean mirrored) { }
+    public record Event(double angle, double residualFlux, SteadyMode mode, int period, double peakPerUnit, double phase,
+                        boolean mirrored) { }
 
     /**
      * What an ensemble settled into.
@@ -165,15 +164,14 @@ public record SwitchingEnsemble(int angles, double[] residualFluxes, SimulationS
             double flux = fl[i % nf] * fluxBase;
             return Simulator.simulate(circuit, simulation.withSourceAngle(angle).withInitialState(flux, 0.0));
         }, executor, 1);
-        List<org.ferromap.balance.OperatingPoint> stable = Branches.stable(new org.ferromap.balance.SingleHarmonicBalance(), circuit);
         List<Event> events = new ArrayList<>(angles * nf);
         for (int k = 0; k < angles; k++) {
             for (int j = 0; j < nf; j++) {
                 boolean mirrored = k >= simulatedAngles;
                 int src = mirrored ? (k - simulatedAngles) * nf + mirrorIndex(fl, j) : k * nf + j;
                 SimulationResult r = sims.get(src);
-                events.add(new Event(2 * Math.PI * k / angles, fl[j], Branches.mode(r, stable, simulation.peakThreshold()), r.mode(),
-                        r.period(), r.peakPerUnit(), r.fundamentalPhase(), mirrored));
+                events.add(new Event(2 * Math.PI * k / angles, fl[j], r.mode(), r.period(), r.peakPerUnit(), r.fundamentalPhase(),
+                        mirrored));
             }
         }
         return summarise(events);

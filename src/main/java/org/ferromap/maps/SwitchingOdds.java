@@ -5,8 +5,6 @@ import java.util.LinkedHashMap;
 import java.util.List;
 import java.util.Map;
 import java.util.SplittableRandom;
-import org.ferromap.balance.OperatingPoint;
-import org.ferromap.balance.SingleHarmonicBalance;
 import org.ferromap.circuit.EquivalentCircuit;
 import org.ferromap.dynamics.SimulationResult;
 import org.ferromap.dynamics.Simulator;
@@ -122,10 +120,6 @@ public final class SwitchingOdds {
         notes.add("Switching instant uniform over the source period; residual flux uniform in [-" + s.residualFlux() + ", "
                 + s.residualFlux() + "] pu of rated peak flux; terminal voltage zero at switching. Real breakers favour some "
                 + "instants (pre-strike, current zero): the estimate is for random switching.");
-        notes.add("Period-1 states are assigned to the balance's branches: a state the simulator calls fundamental because it "
-                + "is in antiphase with the source counts as normal when it lies on the balance's normal branch below the "
-                + "peak threshold (the normal state of a loop shorter than resonance is in antiphase); simulatorMode keeps "
-                + "the simulator's own verdict.");
         notes.add("Undetermined runs count as ferroresonant (" + undetermined + " of " + n + "), the conservative side.");
         if (undetermined > 0) {
             notes.add("Without the undetermined runs the estimate would be " + String.format("%.4g", (double) (k - undetermined)
@@ -143,13 +137,11 @@ public final class SwitchingOdds {
 
     private static List<OddsResult.Run> batch(EquivalentCircuit c, OddsSettings s, int from, int to, CellExecutor executor) {
         double fluxBase = c.ratedPeak() / c.omega();
-        List<OperatingPoint> stable = Branches.stable(new SingleHarmonicBalance(), c);
         return IndexedRuns.map(to - from, j -> {
             int i = from + j;
             double[] d = draws(s.seed(), i, s.residualFlux());
             SimulationResult r = Simulator.simulate(c, s.simulation().withSourceAngle(d[0]).withInitialState(d[1] * fluxBase, 0.0));
-            return new OddsResult.Run(i, d[0], d[1], Branches.mode(r, stable, s.simulation().peakThreshold()).label(),
-                    r.mode().label(), r.period(), r.peakPerUnit());
+            return new OddsResult.Run(i, d[0], d[1], r.mode().label(), r.period(), r.peakPerUnit());
         }, executor, 1);
     }
 
