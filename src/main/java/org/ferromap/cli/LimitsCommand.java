@@ -85,6 +85,6 @@ final class LimitsCommand extends BaseCommand {
         if (Double.isInfinite(m)) {
             return "no limit";
         }
-        return Double.isNaN(m) ? "-" : m >= 10_000 ? String.format("%.3g km", m / 1e3) : String.format("%.3g m", m);
+        return Double.isNaN(m) ? "-" : m >= 999.5 ? String.format("%.3g km", m / 1e3) : String.format("%.3g m", m);
     }
 }

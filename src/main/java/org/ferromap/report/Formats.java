@@ -8,7 +8,7 @@ final class Formats {
     private Formats() {
     }
 
-    /** A length for tables: "33.0 m", "1.85 km", "none" for infinity, "-" for NaN. */
+    /** A length for tables: "33.0 m", "1.85 km", "no limit" for infinity, "-" for NaN. */
     static String length(double m) {
         if (Double.isInfinite(m)) {
             return "no limit";
@@ -16,7 +16,7 @@ final class Formats {
         if (Double.isNaN(m)) {
             return "-";
         }
-        return m >= 10_000 ? String.format(Locale.ROOT, "%.3g km", m / 1e3) : String.format(Locale.ROOT, "%.3g m", m);
+        return m >= 999.5 ? String.format(Locale.ROOT, "%.3g km", m / 1e3) : String.format(Locale.ROOT, "%.3g m", m);
     }
 
     /** A number with 4 significant digits, "-" for NaN or infinity. */
