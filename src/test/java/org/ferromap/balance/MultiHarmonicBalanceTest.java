@@ -11,6 +11,7 @@ import org.apache.commons.math3.ode.FirstOrderDifferentialEquations;
 import org.apache.commons.math3.ode.nonstiff.DormandPrince853Integrator;
 import org.ferromap.circuit.EquivalentCircuit;
 import org.ferromap.equipment.PolynomialCurve;
+import org.ferromap.equipment.LinearCurve;
 import org.ferromap.equipment.SaturationCurve;
 import org.junit.jupiter.api.Test;
 
@@ -414,47 +415,4 @@ class MultiHarmonicBalanceTest {
                         + " vs " + java.util.Arrays.deepToString(expected));
     }
 
-    /** Test-only linear magnetizing branch i = lambda / L. */
-    static final class LinearCurve implements SaturationCurve {
-        private final double l;
-
-        LinearCurve(double inductance) {
-            this.l = inductance;
-        }
-
-        @Override
-        public double current(double lambda) {
-            return lambda / l;
-        }
-
-        @Override
-        public double currentSlope(double lambda) {
-            return 1 / l;
-        }
-
-        @Override
-        public double fundamentalCurrent(double amplitude) {
-            return amplitude / l;
-        }
-
-        @Override
-        public double fluxLinkage(double current) {
-            return current * l;
-        }
-
-        @Override
-        public List<CurvePoint> definingPoints() {
-            return List.of(new CurvePoint(1, 1 / l));
-        }
-
-        @Override
-        public double airCoreInductance() {
-            return l;
-        }
-
-        @Override
-        public String describe() {
-            return "test linear";
-        }
-    }
 }
