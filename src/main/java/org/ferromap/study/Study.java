@@ -42,7 +42,7 @@ public record Study(
      * The analyses a study may ask for: points (operating points), curve (the magnetizing curve),
      * branch (continuation of a branch), folds (fold points and the cusp), simulate (time domain),
      * map (a parameter map), limits (critical length and damping limits), compare (against other
-     * studies), damping (sizing a damping resistor), odds (share of switching angles that end in
+     * studies), damping (sizing a damping resistor), odds (probability over random switching instants and residual flux of ending in
      * ferroresonance).
      */
     public static final List<String> ANALYSIS_NAMES = List.of(
