@@ -633,7 +633,7 @@ public final class DormandPrince853 {
         return true;
     }
 
-    /** The Runge-Kutta matrix rows, nodes and weights, for comparison with other transcriptions (stages 1..12). */
+    /** The Runge-Kutta matrix rows, nodes and weights, for comparison with other published copies (stages 1..12). */
     static double[] nodes() {
         return new double[] {0, C2, C3, C4, C5, C6, C7, C8, C9, C10, C11, 1.0};
     }

@@ -33,8 +33,8 @@ class DormandPrince853Test {
     }
 
     @Test
-    void tableauMatchesHipparchusTranscription() {
-        // Transcription check against Hipparchus's DOP853 tableau (an independent copy of the same
+    void tableauMatchesHipparchusCopy() {
+        // Copy check against Hipparchus's DOP853 tableau (an independent copy of the same
         // published coefficients); identical doubles expected, 1 ulp allowed.
         DormandPrince853Integrator h = new DormandPrince853Integrator(1e-3, 1, 1e-6, 1e-6);
         double[] c = DormandPrince853.nodes();
