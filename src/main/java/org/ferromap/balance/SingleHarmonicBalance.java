@@ -90,57 +90,104 @@ public final class SingleHarmonicBalance {
             boolean bistable = kappa > c * b.g;
             return new CuspCondition(bistable, rMin * cap, 1.0 / rMin, gMin * w * cap, flux * b.baseFlux, e);
         }
-        double[] range = scanRange(b);
-        double[] xs = grid(range[0], range[1]);
-        LocalMinimum lm = new LocalMinimum();
-        // C_min: the smallest capacitance ratio r at which some x is a fold, r_-(x) minimised over x.
-        double bestR = Double.POSITIVE_INFINITY;
-        int best = -1;
-        for (int k = 0; k < xs.length; k++) {
-            double r = foldLocusLower(b, xs[k]);
-            if (r < bestR) {
-                bestR = r;
-                best = k;
+        return scannedCusp(circuit);
+    }
+
+    /** Steps of the bisections on "has a fold pair": halves the bracket to below 1e-12 relative. */
+    private static final int BISECTIONS = 200;
+    /** Relative width at which a bisection in C or G stops: far below the 1e-3 the tests probe. */
+    private static final double BISECTION_RELATIVE = 1e-12;
+    /** How far (factor 2 each step) the capacitance or conductance bracket is widened before giving up. */
+    private static final int BRACKET_STEPS = 200;
+
+    /**
+     * The cusp of a curve without closed form, by the definition itself: fold pairs are what
+     * {@link #folds} finds, C_min and G_min the boundaries of "has a fold pair" in C (at this G)
+     * and in G (at this C), found by bracketing and bisection. For G the predicate is monotone
+     * (det grows with g^2 at every flux); in C the bracket is grown from this circuit's
+     * capacitance, so the boundary found is that of the fold pair that persists up to it.
+     */
+    private CuspCondition scannedCusp(EquivalentCircuit circuit) {
+        double w = circuit.omega();
+        double cap = circuit.totalCapacitance();
+        double g = circuit.conductance();
+        boolean bistable = hasFoldPair(circuit);
+        // G_min: the total shunt conductance at and above which no fold pair is left.
+        double gLoad = 1.0 / circuit.loadResistance();
+        double gMin = 0.0;
+        if (hasFoldPair(withConductance(circuit, gLoad))) {
+            double lo = gLoad;
+            double hi = Math.max(g, gLoad) > 0 ? 2 * Math.max(g, gLoad) : w * cap * 1e-9;
+            for (int k = 0; k < BRACKET_STEPS && hasFoldPair(withConductance(circuit, hi)); k++) {
+                lo = hi;
+                hi *= 2;
             }
-        }
-        double rMin = Double.NaN;
-        double cuspFlux = Double.NaN;
-        double cuspSource = Double.NaN;
-        if (best >= 0) {
-            double xStar = xs[best];
-            rMin = bestR;
-            if (best > 0 && best < xs.length - 1) {
-                double u = lm.minimize(t -> foldLocusLower(b, Math.exp(t)),
-                        Math.log(xs[best - 1]), Math.log(xs[best + 1]), 1e-10, 1e-10, 200);
-                if (lm.lastValue() <= bestR) {
-                    xStar = Math.exp(u);
-                    rMin = lm.lastValue();
+            for (int k = 0; k < BISECTIONS && hi - lo > BISECTION_RELATIVE * hi; k++) {
+                double mid = 0.5 * (lo + hi);
+                if (hasFoldPair(withConductance(circuit, mid))) {
+                    lo = mid;
+                } else {
+                    hi = mid;
                 }
             }
-            double d = b.n1(xStar) - rMin;
-            cuspFlux = xStar * b.baseFlux;
-            cuspSource = xStar * Math.sqrt(d * d + b.g * b.g) * b.sourcePerDrive;
+            gMin = hi;
         }
-        // G_min: g_min^2 = max over x of (1 - n1)(i1' - 1).
-        double bestQ = 0;
-        int bestQk = -1;
-        for (int k = 0; k < xs.length; k++) {
-            double q = (1 - b.n1(xs[k])) * (b.slope(xs[k]) - 1);
-            if (q > bestQ) {
-                bestQ = q;
-                bestQk = k;
+        // C_min: grow C from this circuit's until a fold pair exists, then shrink until none does.
+        double cHi = cap;
+        boolean found = bistable;
+        for (int k = 0; k < BRACKET_STEPS && !found; k++) {
+            cHi *= 2;
+            found = hasFoldPair(withCapacitance(circuit, cHi));
+        }
+        if (!found) {
+            return new CuspCondition(false, Double.NaN, Double.NaN, gMin, Double.NaN, Double.NaN);
+        }
+        double cLo = 0.5 * cHi;
+        for (int k = 0; k < BRACKET_STEPS && hasFoldPair(withCapacitance(circuit, cLo)); k++) {
+            cHi = cLo;
+            cLo *= 0.5;
+        }
+        for (int k = 0; k < BISECTIONS && cHi - cLo > BISECTION_RELATIVE * cHi; k++) {
+            double mid = 0.5 * (cLo + cHi);
+            if (hasFoldPair(withCapacitance(circuit, mid))) {
+                cHi = mid;
+            } else {
+                cLo = mid;
             }
         }
-        if (bestQk > 0 && bestQk < xs.length - 1) {
-            lm.minimize(t -> {
-                double x = Math.exp(t);
-                return -(1 - b.n1(x)) * (b.slope(x) - 1);
-            }, Math.log(xs[bestQk - 1]), Math.log(xs[bestQk + 1]), 1e-10, 1e-10, 200);
-            bestQ = Math.max(bestQ, -lm.lastValue());
+        double cMin = cHi;
+        // The cusp: the narrowest fold pair just above C_min, the one being born there.
+        PerUnitBranch bc = branch(withCapacitance(circuit, cMin));
+        FoldStructure st = structure(bc);
+        double cuspFlux = Double.NaN;
+        double cuspSource = Double.NaN;
+        double bestGap = Double.POSITIVE_INFINITY;
+        for (int k = 0; k + 1 < st.count; k += 2) {
+            double gap = Math.abs(st.phi[k] - st.phi[k + 1]);
+            if (gap <= bestGap) {
+                bestGap = gap;
+                double x = 0.5 * (st.x[k] + st.x[k + 1]);
+                cuspFlux = x * bc.baseFlux;
+                // E at that flux with C = C_min but Cs as given (the record's convention).
+                cuspSource = Math.sqrt(bc.phi(x)) * bc.baseVoltage * cMin / circuit.seriesCapacitance();
+            }
         }
-        double gMin = Math.sqrt(bestQ);
-        boolean bistable = !Double.isNaN(rMin) && rMin < 1;
-        return new CuspCondition(bistable, rMin * cap, 1.0 / rMin, gMin * w * cap, cuspFlux, cuspSource);
+        return new CuspCondition(bistable, cMin, cap / cMin, gMin, cuspFlux, cuspSource);
+    }
+
+    private boolean hasFoldPair(EquivalentCircuit c) {
+        return structure(branch(c)).bistable();
+    }
+
+    /** The circuit with total shunt conductance g (S, at least the load's), through the core-loss resistance. */
+    private static EquivalentCircuit withConductance(EquivalentCircuit c, double g) {
+        double core = g - 1.0 / c.loadResistance();
+        return c.withCoreLossResistance(core > 0 ? 1.0 / core : Double.POSITIVE_INFINITY);
+    }
+
+    /** The circuit with total capacitance cap (F), all in series (only Cs + Cg matters for the folds). */
+    private static EquivalentCircuit withCapacitance(EquivalentCircuit c, double cap) {
+        return c.withShuntCapacitance(0).withSeriesCapacitance(cap);
     }
 
     /** Distance of the source from the first jump-up fold (the end of the normal branch). */
@@ -207,8 +254,7 @@ public final class SingleHarmonicBalance {
             double q = kappa > 0 ? kappa * kappa * (n - 1) * (n - 1) / (4.0 * n) : -kappa * kappa;
             return q - b.g * b.g;
         }
-        double[] range = scanRange(b);
-        double[] xs = grid(range[0], range[1]);
+        double[] xs = foldGrid(b);
         double best = Double.NEGATIVE_INFINITY;
         int bk = 0;
         for (int k = 0; k < xs.length; k++) {
@@ -251,8 +297,7 @@ public final class SingleHarmonicBalance {
             double xx = kappa * (n + 1) / (2.0 * n);
             x = Math.pow(xx / b.beta, 1.0 / (n - 1));
         } else {
-            double[] range = scanRange(b);
-            double[] xs = grid(range[0], range[1]);
+            double[] xs = foldGrid(b);
             double best = Double.NEGATIVE_INFINITY;
             int bk = 0;
             for (int k = 0; k < xs.length; k++) {
@@ -357,8 +402,7 @@ public final class SingleHarmonicBalance {
     }
 
     private FoldStructure scannedStructure(PerUnitBranch b) {
-        double[] range = scanRange(b);
-        double[] xs = grid(range[0], range[1]);
+        double[] xs = foldGrid(b);
         int n = xs.length;
         double[] ds = new double[n];
         for (int k = 0; k < n; k++) {
@@ -459,6 +503,63 @@ public final class SingleHarmonicBalance {
         return new double[] {0.5 * lo, 2 * hi};
     }
 
+    /** Largest change of n1 or i1' (per unit, against the capacitor line's 1) between neighbouring scan nodes. */
+    private static final double MAX_STEP_CHANGE = 0.125;
+    /** Cap on the nodes a refined scan may hold. */
+    private static final int MAX_NODES = 20000;
+
+    /**
+     * The geometric scan grid refined where n1 or i1' moves by more than {@link #MAX_STEP_CHANGE}
+     * between nodes while n1 is still small enough for a fold (det &lt; 0 needs n1 &lt; 1 &lt; i1'):
+     * sharp knees (piecewise-linear and tabulated curves) pass from linear to saturated within
+     * a few percent of flux, where a fixed 16 per decade would step over the whole fold pair.
+     */
+    double[] foldGrid(PerUnitBranch b) {
+        double[] range = scanRange(b);
+        double[] coarse = grid(range[0], range[1]);
+        double[] xs = new double[Math.max(64, 4 * coarse.length)];
+        double[] ns = new double[xs.length];
+        double[] ss = new double[xs.length];
+        int m = 0;
+        double xPrev = coarse[0];
+        double nPrev = b.n1(xPrev);
+        double sPrev = b.slope(xPrev);
+        xs[m] = xPrev;
+        ns[m] = nPrev;
+        ss[m++] = sPrev;
+        // Explicit stack of pending right ends, so the refinement stays ascending without recursion.
+        double[] stackX = new double[128];
+        int top;
+        for (int k = 1; k < coarse.length; k++) {
+            top = 0;
+            stackX[top++] = coarse[k];
+            while (top > 0) {
+                double xr = stackX[top - 1];
+                double nr = b.n1(xr);
+                double sr = b.slope(xr);
+                boolean steep = Math.abs(nr - nPrev) > MAX_STEP_CHANGE || Math.abs(sr - sPrev) > MAX_STEP_CHANGE;
+                boolean foldPossible = Math.min(nPrev, nr) < 1 + MAX_STEP_CHANGE;
+                if (steep && foldPossible && xr / xPrev > 1 + 1e-9 && m < MAX_NODES && top < stackX.length) {
+                    stackX[top++] = Math.sqrt(xPrev * xr);
+                    continue;
+                }
+                top--;
+                if (m == xs.length) {
+                    xs = java.util.Arrays.copyOf(xs, 2 * m);
+                    ns = java.util.Arrays.copyOf(ns, 2 * m);
+                    ss = java.util.Arrays.copyOf(ss, 2 * m);
+                }
+                xs[m] = xr;
+                ns[m] = nr;
+                ss[m++] = sr;
+                xPrev = xr;
+                nPrev = nr;
+                sPrev = sr;
+            }
+        }
+        return java.util.Arrays.copyOf(xs, m);
+    }
+
     double[] grid(double lo, double hi) {
         int per = settings.scanPointsPerDecade();
         int m = Math.max(2, (int) Math.ceil(Math.log10(hi / lo) * per));
@@ -471,17 +572,6 @@ public final class SingleHarmonicBalance {
         }
         xs[m] = hi;
         return xs;
-    }
-
-    /** r_-(x): the smaller capacitance ratio C'/C at which x is a fold; +inf where none is. */
-    private static double foldLocusLower(PerUnitBranch b, double x) {
-        double n1 = b.n1(x);
-        double s1 = b.slope(x);
-        double d = (s1 - n1) * (s1 - n1) - 4 * b.g * b.g;
-        if (d < 0) {
-            return Double.POSITIVE_INFINITY;
-        }
-        return 0.5 * ((n1 + s1) - Math.sqrt(d));
     }
 
     /** A flux above xa (per unit) where Phi exceeds s^2, on the last, rising piece of the branch. */
