@@ -3,8 +3,8 @@ package org.ferromap.balance;
 /**
  * Where bistability begins (DOMAIN.md §3, §7, derived): the two folds merge at a cusp. For
  * i = a lambda + b lambda^n, C_min = (a + (2 sqrt(n)/(n-1)) w G)/w^2 and
- * G_min = (w^2 C - a)(n-1)/(2 sqrt(n) w); other curves numerically, as the extremum of the fold
- * locus.
+ * G_min = (w^2 C - a)(n-1)/(2 sqrt(n) w); other curves by bisection in C and in G on whether the
+ * fold scan finds a fold pair, so the result always agrees with the folds reported.
  *
  * @param bistable whether this circuit has a fold pair (C &gt; C_min, equivalently G &lt; G_min)
  * @param minimumCapacitance C_min, F: the smallest total capacitance Cs + Cg with a fold pair at

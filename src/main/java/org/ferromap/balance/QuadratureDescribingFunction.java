@@ -1,15 +1,13 @@
 package org.ferromap.balance;
 
 import java.util.Arrays;
-import java.util.List;
-import org.ferromap.equipment.PiecewiseLinearCurve;
 import org.ferromap.equipment.SaturationCurve;
-import org.ferromap.equipment.TabulatedCurve;
 
 /**
  * Describing function of a general curve: value from the curve, slope by adaptive Gauss-Kronrod
- * quadrature over the quarter period. For piecewise-linear and tabulated curves the quarter
- * period is split where Lambda cos t crosses a breakpoint, so each panel has a smooth integrand.
+ * quadrature over the quarter period, split where Lambda cos t crosses one of the curve's
+ * {@link SaturationCurve#kinks() kinks} (piecewise-linear and tabulated breakpoints, also seen
+ * through scaled and composite curves), so each panel has a smooth integrand.
  */
 final class QuadratureDescribingFunction implements DescribingFunction {
 
@@ -21,18 +19,18 @@ final class QuadratureDescribingFunction implements DescribingFunction {
     private final double[] breakpoints;
 
     QuadratureDescribingFunction(SaturationCurve curve) {
+        this(curve, curve.kinks());
+    }
+
+    /** With the given split fluxes (Wb-turn, any order, signs ignored); an empty array gives the unsplit quadrature. */
+    QuadratureDescribingFunction(SaturationCurve curve, double[] splits) {
         this.curve = curve;
-        if (curve instanceof PiecewiseLinearCurve || curve instanceof TabulatedCurve) {
-            List<SaturationCurve.CurvePoint> pts = curve.definingPoints();
-            double[] b = new double[pts.size()];
-            for (int k = 0; k < b.length; k++) {
-                b[k] = Math.abs(pts.get(k).flux());
-            }
-            Arrays.sort(b);
-            this.breakpoints = b;
-        } else {
-            this.breakpoints = new double[0];
+        double[] b = new double[splits.length];
+        for (int k = 0; k < b.length; k++) {
+            b[k] = Math.abs(splits[k]);
         }
+        Arrays.sort(b);
+        this.breakpoints = b;
     }
 
     @Override

@@ -25,8 +25,9 @@ import org.hipparchus.exception.MathRuntimeException;
  * approximation. All work is in per unit ({@link PerUnitBranch}).
  *
  * <p>Immutable and thread-safe. Polynomial curves use closed forms (microseconds per circuit);
- * others scan the flux on a geometric grid, bracket sign changes of dE/dLambda and refine with
- * Brent's method.
+ * others scan the flux on a geometric grid refined across sharp knees, bracket sign changes of
+ * dE/dLambda and refine with Brent's method; their cusp is found by bisection on that same scan,
+ * so it always agrees with {@link #folds}.
  */
 public final class SingleHarmonicBalance {
 
@@ -518,15 +519,11 @@ public final class SingleHarmonicBalance {
         double[] range = scanRange(b);
         double[] coarse = grid(range[0], range[1]);
         double[] xs = new double[Math.max(64, 4 * coarse.length)];
-        double[] ns = new double[xs.length];
-        double[] ss = new double[xs.length];
         int m = 0;
         double xPrev = coarse[0];
         double nPrev = b.n1(xPrev);
         double sPrev = b.slope(xPrev);
-        xs[m] = xPrev;
-        ns[m] = nPrev;
-        ss[m++] = sPrev;
+        xs[m++] = xPrev;
         // Explicit stack of pending right ends, so the refinement stays ascending without recursion.
         double[] stackX = new double[128];
         int top;
@@ -546,12 +543,8 @@ public final class SingleHarmonicBalance {
                 top--;
                 if (m == xs.length) {
                     xs = java.util.Arrays.copyOf(xs, 2 * m);
-                    ns = java.util.Arrays.copyOf(ns, 2 * m);
-                    ss = java.util.Arrays.copyOf(ss, 2 * m);
                 }
-                xs[m] = xr;
-                ns[m] = nr;
-                ss[m++] = sr;
+                xs[m++] = xr;
                 xPrev = xr;
                 nPrev = nr;
                 sPrev = sr;

@@ -45,6 +45,15 @@ public interface SaturationCurve {
     /** A short human description, such as "polynomial a=1.5e-3 b=1.3e-17 n=9". */
     String describe();
 
+    /**
+     * Fluxes where the curve is not smooth (a slope or curvature jump) or where its curvature is
+     * concentrated, Wb-turn, positive and strictly increasing; empty for smooth curves (the
+     * default). Quadrature splits there. A fresh array the caller may change.
+     */
+    default double[] kinks() {
+        return this instanceof KinkedCurve k ? k.kinkFluxes() : new double[0];
+    }
+
     /** A (flux linkage, current) pair of a curve, SI. */
     record CurvePoint(double flux, double current) { }
 }
