@@ -10,6 +10,7 @@ import org.ferromap.continuation.FoldCurve;
 import org.ferromap.continuation.FoldCurveSettings;
 import org.ferromap.continuation.FoldCurveTracer;
 import org.ferromap.continuation.StabilityCriterion;
+import org.ferromap.continuation.TestProblems;
 import org.ferromap.continuation.TwoParameterProblem;
 import org.openjdk.jmh.annotations.Benchmark;
 import org.openjdk.jmh.annotations.BenchmarkMode;
@@ -34,78 +35,10 @@ import org.openjdk.jmh.annotations.Warmup;
 @Fork(1)
 public class ContinuationBenchmark {
 
-    private static final ContinuationProblem S_CURVE = new ContinuationProblem() {
-        @Override
-        public int dimension() {
-            return 1;
-        }
-
-        @Override
-        public void residual(double[] x, double p, double[] out) {
-            out[0] = x[0] * x[0] * x[0] - x[0] - p;
-        }
-
-        @Override
-        public void jacobian(double[] x, double p, double[][] dFdx, double[] dFdp) {
-            dFdx[0][0] = 3 * x[0] * x[0] - 1;
-            dFdp[0] = -1;
-        }
-    };
-
-    private static final TwoParameterProblem CUBIC = new TwoParameterProblem() {
-        @Override
-        public int dimension() {
-            return 1;
-        }
-
-        @Override
-        public void residual(double[] x, double p, double q, double[] out) {
-            out[0] = x[0] * x[0] * x[0] - q * x[0] - p;
-        }
-
-        @Override
-        public void jacobian(double[] x, double p, double q, double[][] dFdx, double[] dFdp, double[] dFdq) {
-            dFdx[0][0] = 3 * x[0] * x[0] - q;
-            dFdp[0] = -1;
-            dFdq[0] = -x[0];
-        }
-    };
-
+    private static final ContinuationProblem S_CURVE = TestProblems.sCurve();
+    private static final TwoParameterProblem CUBIC = TestProblems.cubicCusp();
     private static final int BRATU_NODES = 50;
-
-    private static final ContinuationProblem BRATU = new ContinuationProblem() {
-        private final double h2 = 1.0 / ((BRATU_NODES + 1.0) * (BRATU_NODES + 1.0));
-
-        @Override
-        public int dimension() {
-            return BRATU_NODES;
-        }
-
-        @Override
-        public void residual(double[] u, double p, double[] out) {
-            for (int i = 0; i < BRATU_NODES; i++) {
-                double left = i > 0 ? u[i - 1] : 0;
-                double right = i < BRATU_NODES - 1 ? u[i + 1] : 0;
-                out[i] = (left - 2 * u[i] + right) / h2 + p * Math.exp(u[i]);
-            }
-        }
-
-        @Override
-        public void jacobian(double[] u, double p, double[][] dFdx, double[] dFdp) {
-            for (int i = 0; i < BRATU_NODES; i++) {
-                java.util.Arrays.fill(dFdx[i], 0.0);
-                double e = Math.exp(u[i]);
-                dFdx[i][i] = -2 / h2 + p * e;
-                if (i > 0) {
-                    dFdx[i][i - 1] = 1 / h2;
-                }
-                if (i < BRATU_NODES - 1) {
-                    dFdx[i][i + 1] = 1 / h2;
-                }
-                dFdp[i] = e;
-            }
-        }
-    };
+    private static final ContinuationProblem BRATU = TestProblems.bratu(BRATU_NODES);
 
     private final BranchTracer sCurveTracer = new BranchTracer(ContinuationSettings.DEFAULTS.withWindow(-2, 2));
     private final FoldCurveTracer decadeTracer = new FoldCurveTracer(FoldCurveSettings.DEFAULTS

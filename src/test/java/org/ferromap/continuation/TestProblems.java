@@ -1,13 +1,13 @@
 package org.ferromap.continuation;
 
 /** Small generic problems with closed-form branches, shared by the tests and the benchmark. */
-final class TestProblems {
+public final class TestProblems {
 
     private TestProblems() {
     }
 
     /** The S-curve F = x^3 - x - p with an analytic Jacobian. */
-    static ContinuationProblem sCurve() {
+    public static ContinuationProblem sCurve() {
         return new ContinuationProblem() {
             @Override
             public int dimension() {
@@ -28,7 +28,7 @@ final class TestProblems {
     }
 
     /** The same S-curve with the engine's own (difference) Jacobian. */
-    static ContinuationProblem sCurveDifferenced() {
+    public static ContinuationProblem sCurveDifferenced() {
         return new ContinuationProblem() {
             @Override
             public int dimension() {
@@ -45,7 +45,7 @@ final class TestProblems {
     /**
      * The cubic normal form F = x^3 - q x - p: folds where 3 x^2 = q, p = -2 x^3, cusp at the origin.
      */
-    static TwoParameterProblem cubicCusp() {
+    public static TwoParameterProblem cubicCusp() {
         return new TwoParameterProblem() {
             @Override
             public int dimension() {
@@ -71,7 +71,7 @@ final class TestProblems {
      * cos: (a - w^2) u + d w v + 0.75 g r^2 u - F = 0; sin: (a - w^2) v - d w u + 0.75 g r^2 v = 0,
      * r^2 = u^2 + v^2. First parameter F (force amplitude), second w (forcing frequency).
      */
-    static TwoParameterProblem duffing(double d, double a, double g) {
+    public static TwoParameterProblem duffing(double d, double a, double g) {
         return new TwoParameterProblem() {
             @Override
             public int dimension() {
@@ -108,7 +108,7 @@ final class TestProblems {
      * The 1-D Bratu problem u'' + p e^u = 0 on [0, 1], u(0) = u(1) = 0, by second differences on
      * n interior nodes (h = 1/(n+1)), with its tridiagonal Jacobian.
      */
-    static ContinuationProblem bratu(int n) {
+    public static ContinuationProblem bratu(int n) {
         double h2 = 1.0 / ((n + 1.0) * (n + 1.0));
         return new ContinuationProblem() {
             @Override
