@@ -34,12 +34,8 @@ final class DampingCommand extends BaseCommand {
     @Mixin
     ThreadOptions threads;
 
-    @Option(names = "--length", paramLabel = "Q", description = "Cable length, e.g. 1.2 km (default: the study's).")
-    String length;
-
-    @Option(names = "--voltage", paramLabel = "Q", description = {"Supply line-to-line voltage, e.g. 26 kV (equipment studies),",
-        "or the source with peak/rms (circuit studies). Default: the study's."})
-    String voltage;
+    @Mixin
+    LoopPointOptions point;
 
     @Option(names = "--angles", paramLabel = "N", description = "Switching angles per step (default: the study's, else 8).")
     Integer angles;
@@ -57,14 +53,13 @@ final class DampingCommand extends BaseCommand {
     int work() {
         Study s = study.read();
         DampingSettings settings = DampingSettings.from(s);
+        Double length = point.length(s);
         if (length != null) {
-            if (!s.isEquipmentForm()) {
-                throw new FerromapException(MessageKey.BAD_REQUEST, "--length needs an equipment-form study; this one gives the circuit only");
-            }
-            settings = settings.withLength(positive(Quantities.si(length, Dimension.LENGTH), "--length " + length));
+            settings = settings.withLength(length);
         }
+        Double voltage = point.voltage(s);
         if (voltage != null) {
-            settings = settings.withVoltage(DampingSettings.voltage(voltage, s.isEquipmentForm()));
+            settings = settings.withVoltage(voltage);
         }
         if (angles != null) {
             settings = settings.withEnsemble(settings.ensemble().withAngles(angles));

@@ -56,11 +56,8 @@ final class OddsCommand extends BaseCommand {
     @Option(names = "--residual-flux", paramLabel = "R", description = "Largest residual flux, pu of rated peak flux (default 0.8).")
     Double residualFlux;
 
-    @Option(names = "--length", paramLabel = "Q", description = "Cable length, e.g. 1.2 km (default: the study's).")
-    String length;
-
-    @Option(names = "--voltage", paramLabel = "Q", description = "Supply line-to-line voltage (equipment) or source peak/rms (circuit).")
-    String voltage;
+    @Mixin
+    LoopPointOptions point;
 
     @Override
     int work() {
@@ -95,14 +92,13 @@ final class OddsCommand extends BaseCommand {
         if (residualFlux != null) {
             settings = settings.withResidualFlux(residualFlux);
         }
+        Double length = point.length(s);
         if (length != null) {
-            if (!s.isEquipmentForm()) {
-                throw new FerromapException(MessageKey.BAD_REQUEST, "--length needs an equipment-form study; this one gives the circuit only");
-            }
-            settings = settings.withLength(Quantities.si(length, Dimension.LENGTH));
+            settings = settings.withLength(length);
         }
+        Double voltage = point.voltage(s);
         if (voltage != null) {
-            settings = settings.withVoltage(DampingSettings.voltage(voltage, s.isEquipmentForm()));
+            settings = settings.withVoltage(voltage);
         }
         LocalPoolExecutor ex = threads.executor();
         OddsResult r;
